@@ -1,0 +1,44 @@
+import { type DynamicModule, Module } from '@nestjs/common';
+import { ConfigModule } from '@nestjs/config';
+import { APP_GUARD } from '@nestjs/core';
+import { CqrsModule } from '@nestjs/cqrs';
+import { AuthModule } from './auth/auth.module.js';
+import { JwtAuthGuard } from './auth/jwt-auth.guard.js';
+import { AuthzModule } from './authz/authz.module.js';
+import { PoliciesGuard } from './authz/policies.guard.js';
+import { BranchesModule } from './branches/branches.module.js';
+import { parseConfig } from './config.js';
+import { DatabaseModule } from './database/database.module.js';
+import { EventsModule } from './events/events.module.js';
+import { HealthModule } from './health/health.module.js';
+import { OrganisationModule } from './organisation/organisation.module.js';
+import { SeedModule } from './seed/seed.module.js';
+
+const features = [
+  CqrsModule.forRoot(),
+  DatabaseModule,
+  EventsModule,
+  AuthzModule,
+  AuthModule,
+  HealthModule,
+  OrganisationModule,
+  BranchesModule,
+  SeedModule,
+];
+
+/** The whole API; `register` reads the environment it is given once, so each test app gets its own settings. */
+@Module({
+  providers: [
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+  { provide: APP_GUARD, useClass: PoliciesGuard },
+  ],
+})
+export class AppModule {
+  static register(env: NodeJS.ProcessEnv = process.env): DynamicModule {
+    const config = parseConfig(env);
+    return {
+      module: AppModule,
+    imports: [ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, load: [() => config] }), ...features],
+  };
+  }
+}

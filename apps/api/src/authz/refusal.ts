@@ -1,0 +1,42 @@
+import { subject as asSubject } from '@casl/ability';
+import { DomainError } from '@tressury/domain';
+import type { Role } from '@tressury/schema';
+import type { Action, AppAbility, SubjectName } from './ability.js';
+
+const roleLabel: Record<Role, string> = {
+  owner: 'An owner',
+  manager: 'A manager',
+  front_desk: 'Front desk',
+  stylist: 'A stylist',
+  accountant: 'An accountant',
+};
+
+const subjectLabel: Record<SubjectName, string> = {
+  Organisation: 'the organisation settings',
+  Branch: 'branches',
+  User: 'user accounts',
+  all: 'this',
+};
+
+export function refusal(role: Role, action: Action, subjectName: SubjectName): DomainError {
+  const verb = action === 'manage' ? 'manage' : action;
+  return new DomainError('auth.forbidden', `${roleLabel[role]} may not ${verb} ${subjectLabel[subjectName]}.`, 'forbidden');
+}
+
+/**
+ * Checks a loaded record: outside the caller's reading scope it does not exist for them (404);
+ * readable but not allowed for this action, it is refused (403).
+ */
+export function assertCan(
+  ability: AppAbility,
+  role: Role,
+  action: Action,
+  subjectName: Exclude<SubjectName, 'all'>,
+  record: Record<string, unknown>,
+  notFound: () => DomainError,
+): void {
+  // The loaded row carries every field the conditions name; CASL only reads those.
+  const target = asSubject(subjectName, { ...record }) as unknown as Parameters<AppAbility['can']>[1];
+  if (!ability.can('read', target)) throw notFound();
+  if (!ability.can(action, target)) throw refusal(role, action, subjectName);
+}

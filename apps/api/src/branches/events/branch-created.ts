@@ -1,0 +1,16 @@
+import type { RecordableEvent } from '../../events/recordable-event.js';
+import type { BranchView } from '../dto/branch.view.js';
+
+export class BranchCreated implements RecordableEvent {
+  readonly aggregateType = 'Branch';
+  readonly payload: Record<string, unknown>;
+
+  constructor(
+    readonly organisationId: string,
+    readonly aggregateId: string,
+    readonly actorId: string,
+    after: BranchView,
+  ) {
+    this.payload = { after };
+  }
+}

@@ -1,0 +1,9 @@
+import { Query } from '@nestjs/cqrs';
+import type { AuthUser } from '../../auth/auth-user.js';
+import type { BranchView } from '../dto/branch.view.js';
+
+export class ListBranchesQuery extends Query<BranchView[]> {
+  constructor(readonly user: AuthUser) {
+    super();
+  }
+}

@@ -1,0 +1,45 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
+import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
+import type * as schema from '@tressury/schema';
+
+export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
+export type DatabaseEngine = 'pglite' | 'postgres';
+
+type UnitOfWork = { tx: Db; afterCommit: (() => void)[] };
+
+/**
+ * The Drizzle handle of the current transaction, carried through AsyncLocalStorage: on PGlite a query
+ * sent to the root connection while a transaction is open waits forever, so nothing may reach past it.
+ */
+export class Database {
+  private readonly unitOfWork = new AsyncLocalStorage<UnitOfWork>();
+
+  constructor(
+    private readonly root: Db,
+    readonly engine: DatabaseEngine,
+  ) {}
+
+  get db(): Db {
+    return this.unitOfWork.getStore()?.tx ?? this.root;
+  }
+
+  get inTransaction(): boolean {
+    return this.unitOfWork.getStore() !== undefined;
+  }
+
+  /** Runs `work` in one transaction (joining the current one if any); after-commit hooks run once it commits. */
+  async transaction<T>(work: () => Promise<T>): Promise<T> {
+    if (this.inTransaction) return work();
+    const afterCommit: (() => void)[] = [];
+    const result = await this.root.transaction((tx) => this.unitOfWork.run({ tx: tx as unknown as Db, afterCommit }, work));
+    for (const hook of afterCommit) hook();
+    return result;
+  }
+
+  /** Defers `hook` until the current transaction commits (runs at once outside a transaction). */
+  afterCommit(hook: () => void): void {
+    const unit = this.unitOfWork.getStore();
+    if (unit) unit.afterCommit.push(hook);
+    else hook();
+  }
+}

@@ -1,0 +1,63 @@
+import { PGlite } from '@electric-sql/pglite';
+import * as schema from '@tressury/schema';
+import { migrationsFolder } from '@tressury/schema';
+import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
+import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
+import { drizzle as drizzlePg } from 'drizzle-orm/node-postgres';
+import { migrate as migratePg } from 'drizzle-orm/node-postgres/migrator';
+import { sql } from 'drizzle-orm';
+import { mkdirSync } from 'node:fs';
+import pg from 'pg';
+import { Database, type Db } from './database.js';
+import { lockDataDir } from './data-dir-lock.js';
+
+export type OpenedDatabase = { database: Database; checkpoint: () => Promise<void>; close: () => Promise<void> };
+
+// Several API instances may start at once against one server: only one applies migrations.
+const MIGRATION_LOCK_KEY = 7_305_112_001;
+
+export async function openDatabase(options: { databaseUrl: string | null; dataDir: string }): Promise<OpenedDatabase> {
+  if (options.databaseUrl) {
+    const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 });
+    const db = drizzlePg({ client: pool, schema });
+    const client = await pool.connect();
+    try {
+      await client.query('select pg_advisory_lock($1)', [MIGRATION_LOCK_KEY]);
+      await migratePg(drizzlePg({ client, schema }), { migrationsFolder });
+    } finally {
+      await client.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY]).catch(() => undefined);
+      client.release();
+    }
+    return {
+      database: new Database(db as unknown as Db, 'postgres'),
+      checkpoint: async () => undefined,
+      close: () => pool.end(),
+    };
+  }
+
+  const inMemory = options.dataDir.startsWith('memory://');
+  const unlock = inMemory ? () => undefined : lockDataDir(options.dataDir);
+  try {
+    if (!inMemory) mkdirSync(options.dataDir, { recursive: true });
+    const client = await PGlite.create(inMemory ? undefined : options.dataDir);
+    const db = drizzlePglite({ client, schema });
+    await migratePglite(db, { migrationsFolder });
+    let closed = false;
+    return {
+      database: new Database(db as unknown as Db, 'pglite'),
+      checkpoint: async () => {
+        if (!closed) await db.execute(sql`CHECKPOINT`);
+      },
+      close: async () => {
+        if (closed) return;
+        closed = true;
+        await client.query('CHECKPOINT');
+        await client.close();
+        unlock();
+      },
+    };
+  } catch (error) {
+    unlock();
+    throw error;
+  }
+}
