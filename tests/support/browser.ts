@@ -1,0 +1,29 @@
+import { mkdirSync, mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { type Browser, chromium, type Page } from 'playwright-core';
+import { repoRoot } from './running-app';
+
+export const screenshotDir = join(repoRoot, 'tests/output/screenshots');
+
+export async function launchChromium(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      `--user-data-dir=${mkdtempSync(join(tmpdir(), 'tressury-chromium-'))}`,
+    ],
+  });
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  mkdirSync(screenshotDir, { recursive: true });
+  await page.screenshot({ path: join(screenshotDir, `${name}.png`), fullPage: true });
+}
