@@ -1,6 +1,7 @@
 import { boolean, index, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { branches } from './branches.js';
 import { organisations } from './organisation.js';
+import { staff } from './staff.js';
 
 export const roles = ['owner', 'manager', 'front_desk', 'stylist', 'accountant'] as const;
 export type Role = (typeof roles)[number];
@@ -15,8 +16,8 @@ export const users = pgTable(
     displayName: text('display_name').notNull(),
     passwordHash: text('password_hash').notNull(),
     role: roleEnum('role').notNull(),
-    // Staff records arrive with the tickets feature; the link is kept here for the stylist's own-records rule.
-    staffId: uuid('staff_id'),
+    /** The staff record behind a stylist's sign-in: the stylist's own-records rule reads it. */
+    staffId: uuid('staff_id').references(() => staff.id),
     active: boolean('active').notNull().default(true),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -1,4 +1,4 @@
-import { boolean, char, numeric, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, char, integer, numeric, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { organisations } from './organisation.js';
 
 export const branches = pgTable(
@@ -14,6 +14,10 @@ export const branches = pgTable(
     overtimeMultiplier: numeric('overtime_multiplier', { precision: 12, scale: 3 }).notNull(),
     commissionExemption: boolean('commission_exemption').notNull().default(false),
     retailTaxRate: numeric('retail_tax_rate', { precision: 12, scale: 5 }).notNull(),
+    /** A day close whose cash or card variance is larger than this needs a note. */
+    varianceNoteThreshold: numeric('variance_note_threshold', { precision: 12, scale: 2 }).notNull().default('5.00'),
+    /** How old a client's patch test may be before colour needs an explicit acknowledgement. */
+    patchTestMaxAgeDays: integer('patch_test_max_age_days').notNull().default(180),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },

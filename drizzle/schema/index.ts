@@ -3,3 +3,8 @@ export * from './branches.js';
 export * from './auth.js';
 export * from './events.js';
 export * from './migrations-folder.js';
+export * from './catalogue.js';
+export * from './staff.js';
+export * from './clients.js';
+export * from './tickets.js';
+export * from './day-close.js';

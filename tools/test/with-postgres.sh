@@ -10,7 +10,8 @@ if [ -z "$bin" ] || [ ! -x "$bin/initdb" ]; then
 fi
 
 work=$(mktemp -d /tmp/tressury-pg.XXXXXX)
-port=${TRESSURY_TEST_PG_PORT:-55432}
+# A free port, so several runs can share the machine.
+port=${TRESSURY_TEST_PG_PORT:-$(node -e "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})")}
 run_as=()
 if [ "$(id -u)" = "0" ]; then
   chown postgres: "$work"

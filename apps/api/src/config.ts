@@ -16,6 +16,8 @@ export type AppConfig = {
   seedDemo: boolean;
   webDist: string | null;
   checkpointMinutes: number;
+  /** Card payments: the stripe SDK against the local fake unless a real secret key is set. */
+  cardProcessor: { mode: 'fake' | 'live'; secretKey: string; webhookSecret: string; fakePort: number };
 };
 
 export class ConfigError extends Error {}
@@ -49,6 +51,10 @@ export function parseConfig(env: NodeJS.ProcessEnv): AppConfig {
     throw new ConfigError('JWT_SECRET is required with DATABASE_URL in production, so every API instance signs alike');
   }
   const dataDir = env.TRESSURY_DATA_DIR?.trim() || './data';
+  const stripeKey = env.STRIPE_SECRET_KEY?.trim() || null;
+  const stripeWebhookSecret = env.STRIPE_WEBHOOK_SECRET?.trim() || null;
+  if (stripeKey && !/^(sk|rk)_/.test(stripeKey)) throw new ConfigError('STRIPE_SECRET_KEY must be a secret key (sk_… or rk_…)');
+  if (stripeKey && !stripeWebhookSecret) throw new ConfigError('STRIPE_WEBHOOK_SECRET is required with STRIPE_SECRET_KEY');
   return {
     host: env.HOST?.trim() || '127.0.0.1',
     port: integer(env, 'PORT', 3000, 0, 65535),
@@ -64,6 +70,14 @@ export function parseConfig(env: NodeJS.ProcessEnv): AppConfig {
     seedDemo: flag(env, 'TRESSURY_SEED_DEMO', true),
     webDist: env.TRESSURY_WEB_DIST === '' ? null : (env.TRESSURY_WEB_DIST ?? null),
     checkpointMinutes: integer(env, 'CHECKPOINT_MINUTES', 5, 1, 1440),
+    cardProcessor: stripeKey
+      ? { mode: 'live', secretKey: stripeKey, webhookSecret: stripeWebhookSecret!, fakePort: 0 }
+      : {
+          mode: 'fake',
+          secretKey: `sk_test_fake_${randomBytes(12).toString('hex')}`,
+          webhookSecret: `whsec_fake_${randomBytes(24).toString('hex')}`,
+          fakePort: integer(env, 'CARD_PROCESSOR_FAKE_PORT', 0, 0, 65535),
+        },
   };
 }
 

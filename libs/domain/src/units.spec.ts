@@ -2,7 +2,7 @@ import { Decimal } from 'decimal.js';
 import fc from 'fast-check';
 import { all, create } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { costPerGram, toGrams, toMillilitres } from './units.js';
+import { costPerGram, toGrams, toMillilitres, toRecordedGrams } from './units.js';
 
 // mathjs with BigNumber units: an independent, exact implementation of the same definitions.
 const math = create(all ?? {}, { number: 'BigNumber', precision: 64 });
@@ -105,5 +105,13 @@ describe('costPerGram', () => {
     expect(() => costPerGram('-1', '10', 'g')).toThrow(expect.objectContaining({ field: 'containerCost' }));
     expect(() => costPerGram('10', '10', 'mL', '0')).toThrow(expect.objectContaining({ field: 'densityGramsPerMl' }));
     expect(() => costPerGram('10', '10', 'gallon' as never)).toThrow(expect.objectContaining({ field: 'unit' }));
+  });
+});
+
+describe('toRecordedGrams', () => {
+  it('keeps grams to the milligram: 2 oz = 56.69904625 g (NIST Handbook 44, Appendix C) is recorded as 56.699 g', () => {
+    expect(toRecordedGrams('2', 'oz')).toBe('56.699');
+    expect(toRecordedGrams('0.5', 'oz')).toBe('14.175'); // 14.1747615625 g, half-up
+    expect(toRecordedGrams('45.5', 'g')).toBe('45.5');
   });
 });

@@ -1,6 +1,6 @@
-import type Big from 'big.js';
+import Big from 'big.js';
 import { readChoice, readDecimal } from './fields.js';
-import { roundQuotient } from './money.js';
+import { roundHalfUp, roundQuotient } from './money.js';
 
 export type MassUnit = 'g' | 'kg' | 'oz' | 'lb';
 export type VolumeUnit = 'mL' | 'L' | 'fl oz';
@@ -24,6 +24,11 @@ export function millilitresOf(amount: Big, unit: VolumeUnit): Big {
 export function toGrams(amount: string, unit: MassUnit): string {
   const value = readDecimal(amount, 'amount');
   return gramsOf(value, readChoice(unit, MASS_UNITS, 'unit')).toFixed();
+}
+
+/** Grams as weighed and stored: to the milligram, half-up (a salon scale reads to 0.1 g at best). */
+export function toRecordedGrams(amount: string, unit: MassUnit): string {
+  return roundHalfUp(new Big(toGrams(amount, unit)), 3).toFixed();
 }
 
 export function toMillilitres(amount: string, unit: VolumeUnit): string {

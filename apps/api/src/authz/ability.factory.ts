@@ -3,10 +3,24 @@ import { Injectable } from '@nestjs/common';
 import type { AuthUser } from '../auth/auth-user.js';
 import { defineUserRules } from '../auth/auth.policies.js';
 import { defineBranchRules } from '../branches/branches.policies.js';
+import { defineCatalogueRules } from '../catalogue/catalogue.policies.js';
+import { defineClientRules } from '../clients/clients.policies.js';
+import { defineDayCloseRules } from '../day-close/day-close.policies.js';
+import { defineStaffRules } from '../staff/staff.policies.js';
+import { defineTicketRules } from '../tickets/tickets.policies.js';
 import { defineOrganisationRules } from '../organisation/organisation.policies.js';
 import type { AppAbility, DefineRules } from './ability.js';
 
-const featureRules: DefineRules[] = [defineOrganisationRules, defineBranchRules, defineUserRules];
+const featureRules: DefineRules[] = [
+  defineOrganisationRules,
+  defineBranchRules,
+  defineUserRules,
+  defineCatalogueRules,
+  defineStaffRules,
+  defineClientRules,
+  defineTicketRules,
+  defineDayCloseRules,
+];
 
 /** The one place abilities are built; the web receives the same rules packed in /auth/me. */
 @Injectable()

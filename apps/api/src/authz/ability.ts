@@ -1,7 +1,7 @@
 import type { AbilityBuilder, ForcedSubject, MongoAbility } from '@casl/ability';
 import type { AuthUser } from '../auth/auth-user.js';
 
-export const actions = ['manage', 'create', 'read', 'update', 'delete'] as const;
+export const actions = ['manage', 'create', 'read', 'update', 'delete', 'pay', 'close', 'void', 'refund'] as const;
 export type Action = (typeof actions)[number];
 
 // The fields CASL conditions may name, per subject; each must map to a column in accessibleBy().
@@ -9,6 +9,15 @@ type Records = {
   Organisation: { id: string };
   Branch: { id: string; organisationId: string };
   User: { id: string; organisationId: string };
+  Catalogue: { organisationId: string };
+  Staff: { id: string; organisationId: string; homeBranchId: string };
+  /** Pay figures of a staff member (hourly rate now; earnings and statements with payroll). */
+  StaffPay: { staffId: string; organisationId: string; homeBranchId: string };
+  /** `servedByStaffIds`: the staff with a service line for this client. */
+  Client: { id: string; organisationId: string; homeBranchId: string; servedByStaffIds: string[] };
+  /** `staffIds`: the staff with a service line on this ticket. */
+  Ticket: { id: string; organisationId: string; branchId: string; staffIds: string[] };
+  DayClose: { organisationId: string; branchId: string };
 };
 type Tagged = { [N in keyof Records]: ForcedSubject<N> & Records[N] }[keyof Records];
 

@@ -11,16 +11,33 @@ const roleLabel: Record<Role, string> = {
   accountant: 'An accountant',
 };
 
+const actionLabel: Record<Action, string> = {
+  manage: 'manage',
+  create: 'create',
+  read: 'see',
+  update: 'change',
+  delete: 'delete',
+  pay: 'take payments on',
+  close: 'close',
+  void: 'void',
+  refund: 'refund',
+};
+
 const subjectLabel: Record<SubjectName, string> = {
   Organisation: 'the organisation settings',
   Branch: 'branches',
   User: 'user accounts',
+  Catalogue: 'the service menu and product catalogue',
+  Staff: 'staff records',
+  StaffPay: 'pay figures',
+  Client: 'client records',
+  Ticket: 'tickets',
+  DayClose: 'day closes',
   all: 'this',
 };
 
 export function refusal(role: Role, action: Action, subjectName: SubjectName): DomainError {
-  const verb = action === 'manage' ? 'manage' : action;
-  return new DomainError('auth.forbidden', `${roleLabel[role]} may not ${verb} ${subjectLabel[subjectName]}.`, 'forbidden');
+  return new DomainError('auth.forbidden', `${roleLabel[role]} may not ${actionLabel[action]} ${subjectLabel[subjectName]}.`, 'forbidden');
 }
 
 /**

@@ -2,11 +2,11 @@ import { Test } from '@nestjs/testing';
 import { CommandBus, EventBus } from '@nestjs/cqrs';
 import { branches, domainEvents, users } from '@tressury/schema';
 import { eq } from 'drizzle-orm';
-import type { AuthUser } from '../../auth/auth-user';
-import { AppModule } from '../../app.module';
-import { Database } from '../../database/database';
-import { BranchCreated } from '../events/branch-created';
-import { CreateBranchCommand } from './create-branch.command';
+import type { AuthUser } from '../../auth/auth-user.js';
+import { AppModule } from '../../app.module.js';
+import { Database } from '../../database/database.js';
+import { BranchCreated } from '../events/branch-created.js';
+import { CreateBranchCommand } from './create-branch.command.js';
 
 describe('CreateBranchHandler on the real bus and PGlite', () => {
   let bus: CommandBus;
