@@ -1,6 +1,6 @@
 import { domainEvents } from '@tressury/schema';
 import { desc, eq } from 'drizzle-orm';
-import { startTestApp, type TestApp } from './support/test-app';
+import { startTestApp, type TestApp } from './support/test-app.js';
 
 type Branch = { id: string; name: string; timeZone: string; minimumWage: string; overtimeAfterHours: string };
 
@@ -35,6 +35,8 @@ describe('branches', () => {
         overtimeMultiplier: '1.5',
         commissionExemption: false,
         retailTaxRate: '0',
+        varianceNoteThreshold: '5.00',
+        patchTestMaxAgeDays: 180,
       });
       const list = await t.http().get('/api/branches').set('Authorization', await as('owner')).expect(200);
       expect(list.body.map((b: Branch) => b.name)).toContain('Lantern Quay');
@@ -177,7 +179,7 @@ describe('organisation', () => {
     const read = await t.http().get('/api/organisation').set('Authorization', manager).expect(200);
     expect(read.body.name).toBe('Thistlewick Group');
     const refused = await t.http().patch('/api/organisation').set('Authorization', manager).send({ name: 'Mine' }).expect(403);
-    expect(refused.body.message).toBe('A manager may not update the organisation settings.');
+    expect(refused.body.message).toBe('A manager may not change the organisation settings.');
     const blank = await t.http().patch('/api/organisation').set('Authorization', owner).send({ name: '   ' }).expect(400);
     expect(blank.body.details[0].field).toBe('name');
   });

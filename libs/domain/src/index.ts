@@ -1,9 +1,16 @@
-export { toGrams, toMillilitres, costPerGram } from './units.js';
+export { toGrams, toRecordedGrams, toMillilitres, costPerGram } from './units.js';
 export { developerPercent, developerVolumeFromPercent, oxygenVolumeStrength, mixDevelopers } from './developer.js';
 export { costBowl } from './bowl.js';
 export type { Bowl, BowlCost } from './bowl.js';
 export { computePay } from './pay/compute-pay.js';
 export type { PayInput, PayResult } from './pay/types.js';
 export { roundMoney, sumMoney, parseDecimal } from './money.js';
+export { patchTestStatus, type PatchTestInput, type PatchTestStatus } from './clients/patch-test.js';
 export { DomainError } from './errors.js';
 export type { DomainErrorKind } from './errors.js';
+export { retailLineAmounts } from './tickets/retail-line.js';
+export { serviceLinePrice } from './tickets/service-line-price.js';
+export { cashChange, ticketTotals } from './tickets/ticket-totals.js';
+export type { TicketTotals, TicketTotalsInput } from './tickets/ticket-totals.js';
+export { reconcileDay } from './day-close/cash-reconciliation.js';
+export type { Reconciliation } from './day-close/cash-reconciliation.js';

@@ -33,6 +33,8 @@ export class CreateBranchHandler implements ICommandHandler<CreateBranchCommand>
         overtimeMultiplier: input.overtimeMultiplier ?? '1.5',
         commissionExemption: input.commissionExemption ?? false,
         retailTaxRate: input.retailTaxRate ?? '0',
+        varianceNoteThreshold: input.varianceNoteThreshold ?? '5.00',
+        patchTestMaxAgeDays: input.patchTestMaxAgeDays ?? 180,
       });
       const view = toBranchView(row);
       await this.events.append(new BranchCreated(user.organisationId, row.id, user.id, view));

@@ -21,6 +21,10 @@ export class BranchView {
   commissionExemption: boolean;
   /** Retail sales tax as a fraction, decimal string (0.0825 = 8.25 %). */
   retailTaxRate: string;
+  /** A day close with a variance above this needs a note, decimal string. */
+  varianceNoteThreshold: string;
+  /** Days a client's patch test stays current for colour. */
+  patchTestMaxAgeDays: number;
   createdAt: string;
   updatedAt: string;
 }
@@ -36,6 +40,8 @@ export function toBranchView(row: BranchRow): BranchView {
     overtimeMultiplier: plain(row.overtimeMultiplier),
     commissionExemption: row.commissionExemption,
     retailTaxRate: plain(row.retailTaxRate),
+    varianceNoteThreshold: row.varianceNoteThreshold,
+    patchTestMaxAgeDays: row.patchTestMaxAgeDays,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };

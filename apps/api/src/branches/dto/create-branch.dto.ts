@@ -1,4 +1,4 @@
-import { IsBoolean, IsISO4217CurrencyCode, IsOptional, IsString, IsTimeZone, Length } from 'class-validator';
+import { IsBoolean, IsISO4217CurrencyCode, IsInt, IsOptional, IsString, IsTimeZone, Length, Max, Min } from 'class-validator';
 import { IsDecimalString } from '../../common/is-decimal-string.js';
 import { Trim } from '../../common/trim.js';
 
@@ -43,4 +43,16 @@ export class CreateBranchDto {
   @IsOptional()
   @IsDecimalString({ min: '0', max: '1', scale: 5 })
   retailTaxRate?: string;
+
+  /** A day close whose cash or card variance is above this needs a note; "5.00" when left out. */
+  @IsOptional()
+  @IsDecimalString({ min: '0', max: '100000', scale: 2 })
+  varianceNoteThreshold?: string;
+
+  /** How many days a client's patch test stays current for colour; 180 when left out (a salon policy: local codes govern). */
+  @IsOptional()
+  @IsInt()
+  @Min(0)
+  @Max(3650)
+  patchTestMaxAgeDays?: number;
 }

@@ -1,0 +1,14 @@
+import { Query } from '@nestjs/cqrs';
+import type { AuthUser } from '../../auth/auth-user.js';
+import type { FormulaPageView } from '../dto/formula.view.js';
+import type { PageQueryDto } from '../dto/page-query.dto.js';
+
+export class ListClientFormulasQuery extends Query<FormulaPageView> {
+  constructor(
+    readonly user: AuthUser,
+    readonly clientId: string,
+    readonly page: PageQueryDto,
+  ) {
+    super();
+  }
+}
