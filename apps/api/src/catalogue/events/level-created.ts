@@ -1,0 +1,16 @@
+import type { RecordableEvent } from '../../events/recordable-event.js';
+import type { LevelView } from '../dto/level.view.js';
+
+export class LevelCreated implements RecordableEvent {
+  readonly aggregateType = 'Level';
+  readonly payload: Record<string, unknown>;
+
+  constructor(
+    readonly organisationId: string,
+    readonly aggregateId: string,
+    readonly actorId: string,
+    after: LevelView,
+  ) {
+    this.payload = { after };
+  }
+}
