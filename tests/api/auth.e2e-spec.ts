@@ -1,7 +1,7 @@
 import { DEMO_PASSWORD, demoBusiness } from '@tressury/fixtures';
 import { refreshTokens } from '@tressury/schema';
 import { sql } from 'drizzle-orm';
-import { startTestApp, type TestApp } from './support/test-app';
+import { startTestApp, type TestApp } from './support/test-app.js';
 
 const owner = demoBusiness.users.find((u) => u.role === 'owner')!;
 const stylist = demoBusiness.users.find((u) => u.role === 'stylist')!;

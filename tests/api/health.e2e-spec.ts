@@ -1,4 +1,4 @@
-import { startTestApp, type TestApp } from './support/test-app';
+import { startTestApp, type TestApp } from './support/test-app.js';
 
 describe('health', () => {
   let t: TestApp;

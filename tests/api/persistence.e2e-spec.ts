@@ -2,9 +2,9 @@ import { DEMO_PASSWORD } from '@tressury/fixtures';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { DataDirLockedError } from '../../apps/api/src/database/data-dir-lock';
-import { openDatabase } from '../../apps/api/src/database/open-database';
-import { startTestApp } from './support/test-app';
+import { DataDirLockedError } from '../../apps/api/src/database/data-dir-lock.js';
+import { openDatabase } from '../../apps/api/src/database/open-database.js';
+import { startTestApp } from './support/test-app.js';
 
 // The data-directory behaviour belongs to embedded PGlite; on a PostgreSQL server the server keeps the data.
 const describePglite = process.env.TEST_DATABASE_URL ? describe.skip : describe;

@@ -1,7 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot } from '../support/browser';
-import { type RunningApp, startBuiltApp } from '../support/running-app';
+import { launchChromium, screenshot } from '../support/browser.js';
+import { type RunningApp, startBuiltApp } from '../support/running-app.js';
 
 const DEMO_PASSWORD = 'tressury-demo';
 

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import openapiTS, { astToString } from 'openapi-typescript';
 import { describe, expect, it } from 'vitest';
-import { repoRoot } from '../support/running-app';
+import { repoRoot } from '../support/running-app.js';
 
 // CONVENTIONS.md: the web's API types are generated from the API's OpenAPI document, never hand-written.
 describe('the web app’s API types', () => {

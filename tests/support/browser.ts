@@ -2,7 +2,7 @@ import { mkdirSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { type Browser, chromium, type Page } from 'playwright-core';
-import { repoRoot } from './running-app';
+import { repoRoot } from './running-app.js';
 
 export const screenshotDir = join(repoRoot, 'tests/output/screenshots');
 

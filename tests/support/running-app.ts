@@ -7,11 +7,14 @@ export const repoRoot = resolve(import.meta.dirname, '../..');
 
 export type RunningApp = { baseUrl: string; stop: () => Promise<void> };
 
-/** Starts the built app (API + web) as a user would, on its own port and a fresh data directory. */
-export async function startBuiltApp(port: number): Promise<RunningApp> {
+/**
+ * Starts the built app (API + web) as a user would, on its own port and a fresh data directory;
+ * `env` adds or overrides settings, e.g. a higher LOGIN_THROTTLE_LIMIT for a test that signs in often.
+ */
+export async function startBuiltApp(port: number, env: Record<string, string> = {}): Promise<RunningApp> {
   const dataRoot = mkdtempSync(join(tmpdir(), 'tressury-browser-'));
   const child: ChildProcess = spawn(process.execPath, [join(repoRoot, 'apps/api/dist/main.js')], {
-    env: { ...process.env, PORT: String(port), TRESSURY_DATA_DIR: join(dataRoot, 'data'), DATABASE_URL: '' },
+    env: { ...process.env, PORT: String(port), TRESSURY_DATA_DIR: join(dataRoot, 'data'), DATABASE_URL: '', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

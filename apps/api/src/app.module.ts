@@ -7,6 +7,12 @@ import { JwtAuthGuard } from './auth/jwt-auth.guard.js';
 import { AuthzModule } from './authz/authz.module.js';
 import { PoliciesGuard } from './authz/policies.guard.js';
 import { BranchesModule } from './branches/branches.module.js';
+import { CardProcessorModule } from './card-processor/card-processor.module.js';
+import { CatalogueModule } from './catalogue/catalogue.module.js';
+import { ClientsModule } from './clients/clients.module.js';
+import { DayCloseModule } from './day-close/day-close.module.js';
+import { StaffModule } from './staff/staff.module.js';
+import { TicketsModule } from './tickets/tickets.module.js';
 import { parseConfig } from './config.js';
 import { DatabaseModule } from './database/database.module.js';
 import { EventsModule } from './events/events.module.js';
@@ -23,6 +29,12 @@ const features = [
   HealthModule,
   OrganisationModule,
   BranchesModule,
+  CatalogueModule,
+  StaffModule,
+  ClientsModule,
+  CardProcessorModule,
+  TicketsModule,
+  DayCloseModule,
   SeedModule,
 ];
 

@@ -13,7 +13,8 @@ export type AppConfig = {
   cookieSecure: boolean;
   loginThrottleLimit: number;
   loginThrottleWindowMs: number;
-  seedDemo: boolean;
+  /** What an empty database gets at start: the whole demo business, its organisation, branches and sign-ins only, or nothing. */
+  seedDemo: 'full' | 'basic' | false;
   webDist: string | null;
   checkpointMinutes: number;
   /** Card payments: the stripe SDK against the local fake unless a real secret key is set. */
@@ -67,7 +68,7 @@ export function parseConfig(env: NodeJS.ProcessEnv): AppConfig {
     cookieSecure: flag(env, 'COOKIE_SECURE', false),
     loginThrottleLimit: integer(env, 'LOGIN_THROTTLE_LIMIT', 10, 1, 100000),
     loginThrottleWindowMs: integer(env, 'LOGIN_THROTTLE_WINDOW_MS', 60000, 1000, 3600000),
-    seedDemo: flag(env, 'TRESSURY_SEED_DEMO', true),
+    seedDemo: env.TRESSURY_SEED_DEMO === 'basic' ? 'basic' : env.TRESSURY_SEED_DEMO === 'full' || flag(env, 'TRESSURY_SEED_DEMO', true) ? 'full' : false,
     webDist: env.TRESSURY_WEB_DIST === '' ? null : (env.TRESSURY_WEB_DIST ?? null),
     checkpointMinutes: integer(env, 'CHECKPOINT_MINUTES', 5, 1, 1440),
     cardProcessor: stripeKey

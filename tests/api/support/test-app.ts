@@ -2,13 +2,12 @@ import type { INestApplication } from '@nestjs/common';
 import { Test } from '@nestjs/testing';
 import { DEMO_PASSWORD, demoBusiness, type DemoRole } from '@tressury/fixtures';
 import request from 'supertest';
-import type { App } from 'supertest/types';
-import { AppModule } from '../../../apps/api/src/app.module';
-import { configureApp } from '../../../apps/api/src/configure-app';
-import { Database } from '../../../apps/api/src/database/database';
+import { AppModule } from '../../../apps/api/src/app.module.js';
+import { configureApp } from '../../../apps/api/src/configure-app.js';
+import { Database } from '../../../apps/api/src/database/database.js';
 
 export type TestApp = {
-  app: INestApplication<App>;
+  app: INestApplication;
   http: () => ReturnType<typeof request>;
   database: Database;
   tokenFor: (role: DemoRole) => Promise<string>;
@@ -18,7 +17,8 @@ export type TestApp = {
 let counter = 0;
 
 /**
- * The real AppModule on a fresh database with the demo business loaded: in-memory PGlite by default,
+ * The real AppModule on a fresh database with the demo organisation, branches and sign-ins loaded (pass
+ * `{ TRESSURY_SEED_DEMO: 'full' }` for the whole demo business with its tickets): in-memory PGlite by default,
  * or the PostgreSQL server named by TEST_DATABASE_URL (each app gets its own new database there).
  */
 export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
@@ -28,12 +28,12 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
   Object.assign(process.env, {
     TRESSURY_DATA_DIR: `memory://test-${process.pid}-${++counter}`,
     DATABASE_URL: databaseUrl,
-    TRESSURY_SEED_DEMO: 'true',
+    TRESSURY_SEED_DEMO: 'basic',
     LOGIN_THROTTLE_LIMIT: '1000',
     ...env,
   });
   const moduleRef = await Test.createTestingModule({ imports: [AppModule.register()] }).compile();
-  const app = moduleRef.createNestApplication<INestApplication<App>>({ logger: ['error'] });
+  const app = moduleRef.createNestApplication<INestApplication>({ logger: ['error'], rawBody: true });
   configureApp(app);
   await app.init();
   const tokens = new Map<DemoRole, string>();

@@ -1,6 +1,7 @@
 import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import { DomainError, type DomainErrorKind } from '@tressury/domain';
 import type { Response } from 'express';
+import { CardProcessorUnavailableError } from '../card-processor/card-processor-errors.js';
 import { NotSignedInError } from './not-signed-in.error.js';
 import { ValidationFailedError } from './validation-failed.error.js';
 
@@ -36,6 +37,15 @@ export class DomainErrorFilter implements ExceptionFilter {
   private toBody(exception: unknown): ErrorBody {
     if (exception instanceof ValidationFailedError) {
       return { statusCode: 400, code: exception.code, message: exception.message, details: exception.problems };
+    }
+    if (exception instanceof CardProcessorUnavailableError) {
+      this.logger.warn(exception.message);
+      return {
+        statusCode: 503,
+        code: 'card_processor.unavailable',
+        message: 'The card processor did not answer. Nothing is lost: try again with the same checkout, and a card is charged at most once.',
+        details: [],
+      };
     }
     if (exception instanceof NotSignedInError) {
       return { statusCode: 401, code: exception.code, message: exception.message, details: [] };

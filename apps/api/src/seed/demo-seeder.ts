@@ -1,12 +1,45 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { demoBusiness, DEMO_PASSWORD } from '@tressury/fixtures';
-import { branches, domainEvents, organisations, userBranches, users } from '@tressury/schema';
+import { DEMO_PASSWORD, demoBusiness, generateDemoBusiness, generateDemoFoundation } from '@tressury/fixtures';
+import {
+  bowlComponents,
+  bowls,
+  branches,
+  clients,
+  dayCloses,
+  domainEvents,
+  levels,
+  organisations,
+  payments,
+  products,
+  retailLines,
+  servicePrices,
+  services,
+  staff,
+  ticketServiceLines,
+  tickets,
+  tips,
+  userBranches,
+  users,
+} from '@tressury/schema';
+import { getTableColumns, getTableName, sql } from 'drizzle-orm';
+import type { PgTable } from 'drizzle-orm/pg-core';
+import { performance } from 'node:perf_hooks';
 import { hashPassword } from '../auth/passwords.js';
 import type { AppConfig } from '../config.js';
 import { Database } from '../database/database.js';
+import { demoEndDates } from './demo-dates.js';
 
-/** Loads the invented demo business into an empty database; a database with any organisation is left alone. */
+export type SeedMode = 'basic' | 'full';
+
+// One JSON parameter per chunk: 1000 rows keep each statement around a megabyte.
+const CHUNK = 1000;
+
+/**
+ * Loads the invented demo business into an empty database; a database with any organisation is left
+ * alone. `full` is the whole business with its last 120 days of tickets, every day up to yesterday
+ * closed; `basic` only the organisation, branches and sign-ins (the API tests build their own floor).
+ */
 @Injectable()
 export class DemoSeeder implements OnApplicationBootstrap {
   private readonly logger = new Logger('DemoSeeder');
@@ -17,42 +50,85 @@ export class DemoSeeder implements OnApplicationBootstrap {
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
-    if (this.config.get('seedDemo', { infer: true })) await this.seedIfEmpty();
+    const mode = this.config.get('seedDemo', { infer: true });
+    if (mode) await this.seedIfEmpty(mode);
   }
 
-  async seedIfEmpty(): Promise<boolean> {
+  async seedIfEmpty(mode: SeedMode = 'full'): Promise<boolean> {
+    if (!(await this.isEmpty())) return false;
     const passwordHash = await hashPassword(DEMO_PASSWORD);
+    const started = performance.now();
+    const full = mode === 'full' ? generateDemoBusiness(demoEndDates()) : null;
+    const foundation = full ?? generateDemoFoundation({ createdAt: new Date() });
+    const generated = performance.now();
+    const organisationId = foundation.organisation.id;
     const seeded = await this.database.transaction(async () => {
-      const db = this.database.db;
-      const existing = await db.select({ id: organisations.id }).from(organisations).limit(1);
-      if (existing.length > 0) return false;
-      const [organisation] = await db.insert(organisations).values({ name: demoBusiness.organisationName }).returning();
-      const organisationId = organisation!.id;
-      const branchRows = await db
-        .insert(branches)
-        .values(demoBusiness.branches.map(({ key: _key, ...branch }) => ({ ...branch, organisationId })))
-        .returning();
-      const branchIdByKey = new Map(demoBusiness.branches.map((branch, i) => [branch.key, branchRows[i]!.id]));
-      for (const user of demoBusiness.users) {
-        const [row] = await db
-          .insert(users)
-          .values({ organisationId, email: user.email, displayName: user.displayName, role: user.role, passwordHash })
-          .returning();
-        if (user.branchKeys.length > 0) {
-          await db.insert(userBranches).values(user.branchKeys.map((key) => ({ userId: row!.id, branchId: branchIdByKey.get(key)! })));
-        }
+      if (!(await this.isEmpty())) return false;
+      await this.insert(organisations, [foundation.organisation]);
+      await this.insert(branches, foundation.branches);
+      if (full) {
+        await this.insert(levels, full.levels);
+        await this.insert(services, full.services);
+        await this.insert(servicePrices, full.servicePrices);
+        await this.insert(products, full.products);
+        await this.insert(staff, full.staff);
       }
-      await db.insert(domainEvents).values({
-        organisationId,
-        type: 'DemoBusinessLoaded',
-        aggregateType: 'Organisation',
-        aggregateId: organisationId,
-        actorId: null,
-        payload: { branches: branchRows.length, users: demoBusiness.users.length },
-      });
+      await this.insert(
+        users,
+        foundation.users.map((user) => ({ ...user, passwordHash })),
+      );
+      await this.insert(userBranches, foundation.userBranches);
+      if (full) {
+        await this.insert(clients, full.clients);
+        await this.insert(tickets, full.tickets);
+        await this.insert(ticketServiceLines, full.serviceLines);
+        await this.insert(bowls, full.bowls);
+        await this.insert(bowlComponents, full.bowlComponents);
+        await this.insert(retailLines, full.retailLines);
+        await this.insert(tips, full.tips);
+        await this.insert(payments, full.payments);
+        await this.insert(dayCloses, full.dayCloses);
+      }
+      const counts = full?.counts ?? { branches: foundation.branches.length, users: foundation.users.length };
+      await this.insert(domainEvents, [
+        { organisationId, type: 'DemoBusinessLoaded', aggregateType: 'Organisation', aggregateId: organisationId, actorId: null, payload: { mode, ...counts } },
+      ]);
       return true;
     });
-    if (seeded) this.logger.log(`Loaded the demo business "${demoBusiness.organisationName}"`);
-    return seeded;
+    if (!seeded) return false;
+    const loaded = performance.now();
+    const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
+    const content = full
+      ? `${full.counts.tickets} tickets and ${full.counts.dayCloses} closed days in ${full.counts.branches} branches`
+      : `${foundation.branches.length} branches and ${foundation.users.length} sign-ins`;
+    this.logger.log(
+      `Loaded the demo business "${demoBusiness.organisationName}" (${mode}): ${content}; generated in ${seconds(generated - started)}, loaded in ${seconds(loaded - generated)}`,
+    );
+    return true;
+  }
+
+  private async isEmpty(): Promise<boolean> {
+    const existing = await this.database.db.select({ id: organisations.id }).from(organisations).limit(1);
+    return existing.length === 0;
+  }
+
+  /**
+   * Inserts rows typed as the table's inserts, each chunk sent as one JSON parameter that PostgreSQL
+   * unpacks with json_populate_recordset: about three times faster on PGlite than one bind parameter
+   * per value. Columns a row leaves out take their defaults.
+   */
+  private async insert<T extends PgTable>(table: T, rows: T['$inferInsert'][]): Promise<void> {
+    if (rows.length === 0) return;
+    const columns = Object.entries(getTableColumns(table)).filter(([key]) => key in rows[0]!);
+    const names = sql.join(
+      columns.map(([, column]) => sql.identifier(column.name)),
+      sql`, `,
+    );
+    for (let i = 0; i < rows.length; i += CHUNK) {
+      const chunk = rows.slice(i, i + CHUNK).map((row) => Object.fromEntries(columns.map(([key, column]) => [column.name, (row as Record<string, unknown>)[key] ?? null])));
+      await this.database.db.execute(
+        sql`insert into ${table} (${names}) select ${names} from json_populate_recordset(null::${sql.identifier(getTableName(table))}, ${JSON.stringify(chunk)}::json)`,
+      );
+    }
   }
 }

@@ -17,7 +17,7 @@ describe('CreateBranchHandler on the real bus and PGlite', () => {
 
   beforeAll(async () => {
     const moduleRef = await Test.createTestingModule({
-      imports: [AppModule.register({ TRESSURY_DATA_DIR: 'memory://create-branch-spec', TRESSURY_SEED_DEMO: 'true' })],
+      imports: [AppModule.register({ TRESSURY_DATA_DIR: 'memory://create-branch-spec', TRESSURY_SEED_DEMO: 'basic' })],
     }).compile();
     const app = moduleRef.createNestApplication({ logger: ['error'] });
     await app.init();

@@ -2,6 +2,7 @@ import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
 import { DomainError, ticketTotals } from '@tressury/domain';
 import type { PaymentRow } from '@tressury/schema';
 import Big from 'big.js';
+import { CardProcessorUnavailableError } from '../../card-processor/card-processor-errors.js';
 import { CardProcessor } from '../../card-processor/card-processor.js';
 import { Database } from '../../database/database.js';
 import { EventLog } from '../../events/event-log.js';
@@ -74,7 +75,7 @@ export class TakePaymentHandler implements ICommandHandler<TakePaymentCommand> {
     currency: string,
     branchId: string,
   ): Promise<PaymentRow & { failureMessage?: string }> {
-    let result;
+    let result: Awaited<ReturnType<CardProcessor['charge']>>;
     try {
       result = await this.processor.charge({
         amount: payment.amount,
@@ -83,12 +84,16 @@ export class TakePaymentHandler implements ICommandHandler<TakePaymentCommand> {
         idempotencyKey: `tressury-payment-${payment.id}`,
         metadata: { paymentId: payment.id, ticketId: payment.ticketId, branchId, organisationId },
       });
-    } catch {
-      throw new DomainError(
-        'payment.processor_unavailable',
-        'The card processor did not answer. The payment is pending: submit the same checkout again to finish it.',
-        'conflict',
-      );
+    } catch (error) {
+      // Unreachable: whether the card was charged is unknown, so the payment stays pending for a retry
+      // with the same checkout key (or for the processor's webhook).
+      if (error instanceof CardProcessorUnavailableError) throw error;
+      // Refused outright (e.g. below the smallest card amount): this attempt failed.
+      await this.database.transaction(async () => {
+        await this.tickets.updatePayment(payment.id, { status: 'failed' });
+        await this.events.append(new PaymentSettled(organisationId, payment.ticketId, actorId, { paymentId: payment.id, status: 'failed' }));
+      });
+      throw error;
     }
     return this.database.transaction(async () => {
       if (result.status === 'pending') return payment;
