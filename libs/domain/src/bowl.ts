@@ -29,6 +29,19 @@ export type BowlCost = {
 
 const KINDS: readonly BowlComponentKind[] = ['colour', 'lightener', 'developer', 'additive'];
 
+/** Catalogue kinds that go in a bowl, and the part each plays; retail products never do. */
+export const bowlPartOfProductKind = {
+  permanent: 'colour',
+  demi_permanent: 'colour',
+  lightener: 'lightener',
+  developer: 'developer',
+  treatment: 'additive',
+} as const satisfies Record<string, BowlComponentKind>;
+
+export type BowlProductKind = keyof typeof bowlPartOfProductKind;
+
+export const isBowlProductKind = (kind: string): kind is BowlProductKind => Object.hasOwn(bowlPartOfProductKind, kind);
+
 export function costBowl(bowl: Bowl): BowlCost {
   const input = readObject(bowl, '');
   const components = readArray(input.components, 'components').map((raw, i) => {

@@ -1,7 +1,7 @@
 export { toGrams, toRecordedGrams, toMillilitres, costPerGram } from './units.js';
 export { developerPercent, developerVolumeFromPercent, oxygenVolumeStrength, mixDevelopers } from './developer.js';
-export { costBowl } from './bowl.js';
-export type { Bowl, BowlCost } from './bowl.js';
+export { bowlPartOfProductKind, costBowl, isBowlProductKind } from './bowl.js';
+export type { Bowl, BowlCost, BowlComponentKind, BowlProductKind } from './bowl.js';
 export { computePay } from './pay/compute-pay.js';
 export type { PayInput, PayResult } from './pay/types.js';
 export { roundMoney, sumMoney, parseDecimal } from './money.js';

@@ -8,10 +8,10 @@ import { TicketReferences } from '../ticket-references.js';
 import { TicketsRepository } from '../tickets.repository.js';
 import { AddServiceLineCommand } from './add-service-line.command.js';
 
-export const patchTestCaution = (lastPatchTestOn: string | null) =>
+export const patchTestCaution = (hasClient: boolean, lastPatchTestOn: string | null) =>
   new DomainError(
     'ticket.patch_test_caution',
-    `This client has ${lastPatchTestOn ? `no patch test since ${lastPatchTestOn} within the branch's window` : 'no patch test on record'}. ` +
+    `${!hasClient ? 'A walk-in has no client record, so no patch test is on record' : lastPatchTestOn ? `This client's last patch test (${lastPatchTestOn}) is not current for colour today` : 'This client has no patch test on record'}. ` +
       'Common practice is a skin test 48 hours before colour; licensed practice and local codes govern. Confirm to go ahead.',
     'conflict',
     'acknowledgePatchTest',
@@ -43,7 +43,7 @@ export class AddServiceLineHandler implements ICommandHandler<AddServiceLineComm
         throw invalidReference('assistantShare', 'A share needs an assistant.');
       }
       if (service.isColour && !loaded.ticket.patchTestAcknowledgedAt && colourNeedsPatchTestAcknowledgement(loaded)) {
-        if (!input.acknowledgePatchTest) throw patchTestCaution(loaded.client?.lastPatchTestOn ?? null);
+        if (!input.acknowledgePatchTest) throw patchTestCaution(loaded.client !== null, loaded.client?.lastPatchTestOn ?? null);
         await this.tickets.updateTicket(loaded.ticket.id, { patchTestAcknowledgedById: user.id, patchTestAcknowledgedAt: new Date() });
       }
       const discount = input.discount ?? '0';

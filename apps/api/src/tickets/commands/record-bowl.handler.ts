@@ -1,6 +1,5 @@
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import { type Bowl, costBowl, toRecordedGrams } from '@tressury/domain';
-import type { ProductKind } from '@tressury/schema';
+import { bowlPartOfProductKind, costBowl, isBowlProductKind, toRecordedGrams } from '@tressury/domain';
 import type { TicketView } from '../dto/ticket.view.js';
 import { BowlRecorded } from '../events/ticket-events.js';
 import { TicketEditing } from '../ticket-editing.js';
@@ -8,17 +7,6 @@ import { invalidReference, notOnTicket, stylistOwnWorkOnly } from '../ticket-err
 import { TicketReferences } from '../ticket-references.js';
 import { TicketsRepository } from '../tickets.repository.js';
 import { RecordBowlCommand } from './record-bowl.command.js';
-
-type ComponentKind = Bowl['components'][number]['kind'];
-
-const componentKind: Record<ProductKind, ComponentKind | null> = {
-  permanent: 'colour',
-  demi_permanent: 'colour',
-  lightener: 'lightener',
-  developer: 'developer',
-  treatment: 'additive',
-  retail: null,
-};
 
 @CommandHandler(RecordBowlCommand)
 export class RecordBowlHandler implements ICommandHandler<RecordBowlCommand> {
@@ -42,12 +30,11 @@ export class RecordBowlHandler implements ICommandHandler<RecordBowlCommand> {
       const components = await Promise.all(
         input.components.map(async (component, i) => {
           const product = await this.references.product(user.organisationId, component.productId);
-          const kind = product ? componentKind[product.kind] : null;
-          if (!product?.active || !kind) throw invalidReference(`components[${i}].productId`, 'No such colour, lightener, developer or treatment product.');
+          if (!product?.active || !isBowlProductKind(product.kind)) throw invalidReference(`components[${i}].productId`, 'No such colour, lightener, developer or treatment product.');
           return {
             productId: product.id,
             productName: product.name,
-            kind,
+            kind: bowlPartOfProductKind[product.kind],
             grams: toRecordedGrams(component.amount, component.unit),
             costPerGram: product.costPerGram,
             developerVolume: product.kind === 'developer' ? product.developerVolume : null,

@@ -13,7 +13,7 @@ import { invalidReference } from '../ticket-errors.js';
 import { TicketsRepository } from '../tickets.repository.js';
 import { TakePaymentCommand } from './take-payment.command.js';
 
-const declined = (message: string) => new DomainError('payment.declined', `The card was declined: ${message}`, 'conflict');
+const declined = (message: string | undefined) => new DomainError('payment.declined', message ?? 'The card was declined.', 'conflict');
 
 /**
  * Cash settles at once. A card payment is recorded as pending first, then charged through the card
@@ -63,7 +63,7 @@ export class TakePaymentHandler implements ICommandHandler<TakePaymentCommand> {
 
     const settled: PaymentRow & { failureMessage?: string } =
       payment.method === 'card' && payment.status === 'pending' ? await this.charge(user.organisationId, user.id, payment, input.paymentMethod!, currency, branchId) : payment;
-    if (settled.status === 'failed') throw declined(settled.failureMessage ?? 'no reason given');
+    if (settled.status === 'failed') throw declined(settled.failureMessage);
     return this.editing.view(user.organisationId, ticketId);
   }
 

@@ -19,9 +19,10 @@ export class VoidTicketHandler implements ICommandHandler<VoidTicketCommand> {
       ticketId,
       'void',
       async (loaded) => {
-        const { paid } = ticketTotals(loaded);
-        if (paid !== '0.00' || loaded.payments.some((p) => p.status === 'pending')) {
-          throw new DomainError('ticket.paid', `${paid} has been paid on this ticket; refund it before voiding.`, 'conflict');
+        // Once money has been taken the ticket's history stays: a refund, not a void, undoes it.
+        if (loaded.payments.some((p) => p.status !== 'failed')) {
+          const { paid } = ticketTotals(loaded);
+          throw new DomainError('ticket.paid', `Money has been taken on this ticket (${paid} net); refund it instead of voiding.`, 'conflict');
         }
         await this.tickets.updateTicket(loaded.ticket.id, { status: 'void', voidedAt: new Date(), voidedById: user.id, voidReason: input.reason });
         return new TicketVoided(user.organisationId, loaded.ticket.id, user.id, { reason: input.reason, previousStatus: loaded.ticket.status });
