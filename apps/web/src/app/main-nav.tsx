@@ -1,4 +1,4 @@
-import { GridViewIcon, OfficeIcon } from '@blueprintjs/icons';
+import { BoxIcon, ConfirmIcon, GridViewIcon, OfficeIcon, PeopleIcon, PersonIcon, PropertiesIcon } from '@blueprintjs/icons';
 import { NavLink } from 'react-router';
 import { useAbility } from '../lib/ability';
 import { routePaths } from '../lib/route-paths';
@@ -14,6 +14,46 @@ export function MainNav() {
             Overview
           </NavLink>
         </li>
+        {ability.can('read', 'Ticket') && (
+          <li>
+            <NavLink to={routePaths.today} className="tr-nav-link">
+              <PropertiesIcon />
+              Today
+            </NavLink>
+          </li>
+        )}
+        {ability.can('create', 'DayClose') && (
+          <li>
+            <NavLink to={routePaths.dayClose} className="tr-nav-link">
+              <ConfirmIcon />
+              Close the day
+            </NavLink>
+          </li>
+        )}
+        {ability.can('read', 'Client') && (
+          <li>
+            <NavLink to={routePaths.clients} className="tr-nav-link">
+              <PersonIcon />
+              Clients
+            </NavLink>
+          </li>
+        )}
+        {ability.can('read', 'Catalogue') && (
+          <li>
+            <NavLink to={routePaths.catalogue} className="tr-nav-link">
+              <BoxIcon />
+              Menu & products
+            </NavLink>
+          </li>
+        )}
+        {ability.can('read', 'Staff') && (
+          <li>
+            <NavLink to={routePaths.staff} className="tr-nav-link">
+              <PeopleIcon />
+              People
+            </NavLink>
+          </li>
+        )}
         {ability.can('update', 'Branch') && (
           <li>
             <NavLink to={routePaths.branches} className="tr-nav-link">

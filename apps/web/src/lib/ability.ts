@@ -1,12 +1,14 @@
-import { createMongoAbility, type MongoAbility, type RawRuleOf } from '@casl/ability';
+import { createMongoAbility, type ForcedSubject, type MongoAbility, type RawRuleOf } from '@casl/ability';
 import { type PackRule, unpackRules } from '@casl/ability/extra';
 import { createContext, use } from 'react';
 import type { Me } from './session';
 
 // The names the server's ability factory uses (DESIGN.md §2); the rules themselves come packed in /auth/me.
-export type Action = 'manage' | 'create' | 'read' | 'update' | 'delete';
-export type Subject = 'Organisation' | 'Branch' | 'User' | 'all';
-export type AppAbility = MongoAbility<[Action, Subject]>;
+export type Action = 'manage' | 'create' | 'read' | 'update' | 'delete' | 'pay' | 'close' | 'void' | 'refund';
+export type Subject = 'Organisation' | 'Branch' | 'User' | 'Catalogue' | 'Staff' | 'StaffPay' | 'Client' | 'Ticket' | 'DayClose' | 'all';
+/** A loaded record tagged with `subject('Ticket', record)`, so rules with conditions are checked against it. */
+export type TaggedRecord = ForcedSubject<Exclude<Subject, 'all'>>;
+export type AppAbility = MongoAbility<[Action, Subject | TaggedRecord]>;
 
 const abilities = new WeakMap<Me, AppAbility>();
 

@@ -2,5 +2,12 @@
 export const routePaths = {
   overview: '/',
   branches: '/branches',
+  today: '/today',
+  ticket: '/tickets/:ticketId',
+  dayClose: '/close-the-day',
+  clients: '/clients',
+  client: '/clients/:clientId',
+  catalogue: '/menu-and-products',
+  staff: '/people',
   signIn: '/sign-in',
 } as const;

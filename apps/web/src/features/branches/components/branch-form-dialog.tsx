@@ -6,7 +6,7 @@ import type { Branch } from '../api/branch-queries';
 import { useCreateBranch } from '../api/use-create-branch';
 import { useUpdateBranch } from '../api/use-update-branch';
 import { percentText } from './branch-figures';
-import { type BranchField, type BranchFormValues, changesOf, formValuesOf, isBranchField } from './branch-form-values';
+import { type BranchField, type BranchFormValues, changesOf, formValuesOf, isBranchField, payloadOf } from './branch-form-values';
 import './branch-form-dialog.css';
 
 type Problems = Partial<Record<BranchField, string>>;
@@ -21,6 +21,8 @@ const formOrder: BranchField[] = [
   'overtimeAfterHours',
   'overtimeMultiplier',
   'commissionExemption',
+  'varianceNoteThreshold',
+  'patchTestMaxAgeDays',
 ];
 
 const fieldId = (field: BranchField) => `branch-${field}`;
@@ -88,7 +90,7 @@ function BranchForm({ branch, onDone }: { branch?: Branch; onDone: () => void })
       Object.entries(values).map(([field, value]) => [field, typeof value === 'string' ? value.trim() : value]),
     ) as BranchFormValues;
     if (!branch) {
-      create.mutate(trimmed, {
+      create.mutate(payloadOf(trimmed), {
         onSuccess: (created) => {
           void showToast({ intent: Intent.SUCCESS, message: `Branch ${created.name} added.` });
           onDone();
@@ -159,6 +161,10 @@ function BranchForm({ branch, onDone }: { branch?: Branch; onDone: () => void })
         <div className="tr-form-row">
           {field('overtimeAfterHours', 'Overtime after (hours)', 'Hours in a workweek before overtime is due.', text('overtimeAfterHours', { inputMode: 'decimal' }))}
           {field('overtimeMultiplier', 'Overtime multiplier', '1.5 is time and a half.', text('overtimeMultiplier', { inputMode: 'decimal' }))}
+        </div>
+        <div className="tr-form-row">
+          {field('varianceNoteThreshold', 'Day-close note above', 'A cash or card difference larger than this needs a note when the day is closed.', text('varianceNoteThreshold', { inputMode: 'decimal' }))}
+          {field('patchTestMaxAgeDays', 'Patch test valid for (days)', "How long a client's patch test counts before colour needs a confirmation. Licensed practice and local codes govern.", text('patchTestMaxAgeDays', { inputMode: 'decimal' }))}
         </div>
         <FormGroup
           intent={problems.commissionExemption ? Intent.DANGER : Intent.NONE}

@@ -2,7 +2,9 @@ import type { Branch } from '../api/branch-queries';
 import type { NewBranch } from '../api/use-create-branch';
 import type { BranchChanges } from '../api/use-update-branch';
 
-export type BranchFormValues = Required<NewBranch>;
+type BranchPayload = Required<NewBranch>;
+/** What the form holds: every field as typed, the day count as text until it is sent. */
+export type BranchFormValues = Omit<BranchPayload, 'patchTestMaxAgeDays'> & { patchTestMaxAgeDays: string };
 export type BranchField = keyof BranchFormValues;
 
 // US federal starting points (29 U.S.C. 206, 207); each branch changes them to its local law.
@@ -15,12 +17,32 @@ const fresh: BranchFormValues = {
   overtimeMultiplier: '1.5',
   commissionExemption: false,
   retailTaxRate: '0',
+  varianceNoteThreshold: '5.00',
+  patchTestMaxAgeDays: '180',
 };
 
 export function formValuesOf(branch?: Branch): BranchFormValues {
   if (!branch) return { ...fresh };
-  const { name, timeZone, currency, minimumWage, overtimeAfterHours, overtimeMultiplier, commissionExemption, retailTaxRate } = branch;
-  return { name, timeZone, currency, minimumWage, overtimeAfterHours, overtimeMultiplier, commissionExemption, retailTaxRate };
+  const { name, timeZone, currency, minimumWage, overtimeAfterHours, overtimeMultiplier, commissionExemption, retailTaxRate, varianceNoteThreshold } = branch;
+  return {
+    name,
+    timeZone,
+    currency,
+    minimumWage,
+    overtimeAfterHours,
+    overtimeMultiplier,
+    commissionExemption,
+    retailTaxRate,
+    varianceNoteThreshold,
+    patchTestMaxAgeDays: String(branch.patchTestMaxAgeDays),
+  };
+}
+
+/** A whole number of days goes as a number; anything else as typed, for the server to refuse by name. */
+const dayCount = (text: string): number => (/^\d+$/.test(text) ? Number(text) : (text as unknown as number));
+
+export function payloadOf(values: BranchFormValues): BranchPayload {
+  return { ...values, patchTestMaxAgeDays: dayCount(values.patchTestMaxAgeDays) };
 }
 
 /** Only what was changed is sent, so the branch's history records just that. */
@@ -28,7 +50,7 @@ export function changesOf(branch: Branch, values: BranchFormValues): BranchChang
   const before = formValuesOf(branch);
   const changes: Record<string, unknown> = {};
   for (const field of Object.keys(values) as BranchField[]) {
-    if (values[field] !== before[field]) changes[field] = values[field];
+    if (values[field] !== before[field]) changes[field] = field === 'patchTestMaxAgeDays' ? dayCount(values[field]) : values[field];
   }
   return changes as BranchChanges;
 }
