@@ -14,6 +14,7 @@ import {
 } from '@tressury/schema';
 import { and, asc, eq, inArray, ne, sql } from 'drizzle-orm';
 import { Database } from '../database/database.js';
+import { inTurn } from '../database/in-turn.js';
 
 export type DayFigures = {
   ticketsByStatus: { open: number; closed: number; void: number };
@@ -45,7 +46,7 @@ export class DayFiguresQuery {
   async forDay(branchId: string, businessDate: string): Promise<DayFigures> {
     const db = this.database.db;
     const live = and(eq(tickets.branchId, branchId), ne(tickets.status, 'void'));
-    const [statusRows, lineRows, retailRows, tipRows, paymentRows, bowlRows, adjustmentRows, openRows] = await Promise.all([
+    const [statusRows, lineRows, retailRows, tipRows, paymentRows, bowlRows, adjustmentRows, openRows] = await inTurn([
       db
         .select({ status: tickets.status, n: sql<number>`count(*)::int` })
         .from(tickets)
@@ -148,7 +149,7 @@ export class DayFiguresQuery {
   private async openTicketDues(ticketIds: string[]): Promise<Map<string, string>> {
     if (ticketIds.length === 0) return new Map();
     const db = this.database.db;
-    const [lines, retail, tipRows, paymentRows] = await Promise.all([
+    const [lines, retail, tipRows, paymentRows] = await inTurn([
       db.select({ ticketId: ticketServiceLines.ticketId, price: ticketServiceLines.price }).from(ticketServiceLines).where(inArray(ticketServiceLines.ticketId, ticketIds)),
       db.select({ ticketId: retailLines.ticketId, amount: retailLines.amount, tax: retailLines.tax }).from(retailLines).where(inArray(retailLines.ticketId, ticketIds)),
       db.select({ ticketId: tips.ticketId, amount: tips.amount }).from(tips).where(inArray(tips.ticketId, ticketIds)),

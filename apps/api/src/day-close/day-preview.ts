@@ -23,7 +23,8 @@ export class DayPreview {
   }
 
   async build(branch: BranchRow, businessDate: string, cardTotalProcessor: string): Promise<DayPreviewView> {
-    const [figures, close] = await Promise.all([this.figures.forDay(branch.id, businessDate), this.closes.find(branch.id, businessDate)]);
+    const figures = await this.figures.forDay(branch.id, businessDate);
+    const close = await this.closes.find(branch.id, businessDate);
     return {
       branchId: branch.id,
       branchName: branch.name,

@@ -23,6 +23,7 @@ import {
 } from '@tressury/schema';
 import { and, asc, eq, inArray, max, sql } from 'drizzle-orm';
 import { Database } from '../database/database.js';
+import { inTurn } from '../database/in-turn.js';
 
 export type LoadedBowl = BowlRow & { components: BowlComponentRow[] };
 export type LoadedServiceLine = TicketServiceLineRow & { bowls: LoadedBowl[] };
@@ -56,7 +57,7 @@ export class TicketsRepository {
       .where(and(eq(tickets.id, ticketId), eq(tickets.organisationId, organisationId)));
     const [ticket] = options.forUpdate ? await query.for('update') : await query;
     if (!ticket) return null;
-    const [[branch], clientRows, lines, retail, tipRows, paymentRows, closes] = await Promise.all([
+    const [[branch], clientRows, lines, retail, tipRows, paymentRows, closes] = await inTurn([
       db.select().from(branches).where(eq(branches.id, ticket.branchId)),
       ticket.clientId ? db.select().from(clients).where(eq(clients.id, ticket.clientId)) : Promise.resolve([]),
       db.select().from(ticketServiceLines).where(eq(ticketServiceLines.ticketId, ticketId)).orderBy(asc(ticketServiceLines.createdAt), asc(ticketServiceLines.id)),

@@ -27,20 +27,19 @@ export class RecordBowlHandler implements ICommandHandler<RecordBowlCommand> {
         throw invalidReference('mixedByStaffId', 'No such staff member.');
       }
 
-      const components = await Promise.all(
-        input.components.map(async (component, i) => {
-          const product = await this.references.product(user.organisationId, component.productId);
-          if (!product?.active || !isBowlProductKind(product.kind)) throw invalidReference(`components[${i}].productId`, 'No such colour, lightener, developer or treatment product.');
-          return {
-            productId: product.id,
-            productName: product.name,
-            kind: bowlPartOfProductKind[product.kind],
-            grams: toRecordedGrams(component.amount, component.unit),
-            costPerGram: product.costPerGram,
-            developerVolume: product.kind === 'developer' ? product.developerVolume : null,
-          };
-        }),
-      );
+      const components = [];
+      for (const [i, component] of input.components.entries()) {
+        const product = await this.references.product(user.organisationId, component.productId);
+        if (!product?.active || !isBowlProductKind(product.kind)) throw invalidReference(`components[${i}].productId`, 'No such colour, lightener, developer or treatment product.');
+        components.push({
+          productId: product.id,
+          productName: product.name,
+          kind: bowlPartOfProductKind[product.kind],
+          grams: toRecordedGrams(component.amount, component.unit),
+          costPerGram: product.costPerGram,
+          developerVolume: product.kind === 'developer' ? product.developerVolume : null,
+        });
+      }
       const figures = costBowl({
         components: components.map((c) => ({ productId: c.productId, kind: c.kind, grams: c.grams, costPerGram: c.costPerGram, volume: c.developerVolume ?? undefined })),
         leftoverGrams: input.leftoverGrams ?? '0',
