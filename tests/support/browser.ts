@@ -1,11 +1,11 @@
-import { mkdirSync, mkdtempSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { type Browser, chromium, type Page } from 'playwright-core';
 import { repoRoot } from './running-app.js';
 
 export const screenshotDir = join(repoRoot, 'tests/output/screenshots');
 
+// Playwright gives each launch a fresh temporary profile of its own (it refuses a --user-data-dir argument).
 export async function launchChromium(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -18,7 +18,6 @@ export async function launchChromium(): Promise<Browser> {
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      `--user-data-dir=${mkdtempSync(join(tmpdir(), 'tressury-chromium-'))}`,
     ],
   });
 }
