@@ -4,7 +4,7 @@ export { bowlPartOfProductKind, costBowl, isBowlProductKind } from './bowl.js';
 export type { Bowl, BowlCost, BowlComponentKind, BowlProductKind } from './bowl.js';
 export { computePay } from './pay/compute-pay.js';
 export type { PayInput, PayResult } from './pay/types.js';
-export { roundMoney, sumMoney, parseDecimal } from './money.js';
+export { negateMoney, roundMoney, sumMoney, parseDecimal } from './money.js';
 export { patchTestStatus, type PatchTestInput, type PatchTestStatus } from './clients/patch-test.js';
 export { DomainError } from './errors.js';
 export type { DomainErrorKind } from './errors.js';

@@ -3,7 +3,7 @@ import { Decimal } from 'decimal.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DomainError } from './errors.js';
-import { parseDecimal, roundMoney, roundQuotient, sumMoney } from './money.js';
+import { negateMoney, parseDecimal, roundMoney, roundQuotient, sumMoney } from './money.js';
 
 const D = Decimal.clone({ precision: 100, rounding: Decimal.ROUND_HALF_UP });
 
@@ -114,5 +114,13 @@ describe('roundQuotient: one exact division', () => {
         },
       ),
     );
+  });
+});
+
+describe('negateMoney', () => {
+  it('mirrors an amount to the cent, and never prints -0.00', () => {
+    expect(negateMoney('55.00')).toBe('-55.00');
+    expect(negateMoney('-24.5')).toBe('24.50');
+    expect(negateMoney('0')).toBe('0.00');
   });
 });

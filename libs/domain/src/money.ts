@@ -65,3 +65,8 @@ export function roundMoney(value: string): string {
 export function sumMoney(values: string[]): string {
   return moneyText(sum(values.map((value, i) => moneyOf(parseDecimal(value, `values[${i}]`)))));
 }
+
+/** The same amount with the opposite sign, to the cent: a refund line mirrors the sale it reverses. */
+export function negateMoney(value: string): string {
+  return moneyText(parseDecimal(value, 'value').times(-1));
+}

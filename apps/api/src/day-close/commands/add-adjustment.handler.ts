@@ -1,6 +1,5 @@
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import { DomainError } from '@tressury/domain';
-import Big from 'big.js';
+import { DomainError, roundMoney } from '@tressury/domain';
 import { AbilityFactory } from '../../authz/ability.factory.js';
 import { assertCan } from '../../authz/refusal.js';
 import { businessDateIn } from '../../common/business-date.js';
@@ -23,7 +22,8 @@ export class AddAdjustmentHandler implements ICommandHandler<AddAdjustmentComman
   ) {}
 
   async execute({ user, input }: AddAdjustmentCommand): Promise<AdjustmentView> {
-    if (new Big(input.amount).eq(0)) throw new DomainError('adjustment.zero', 'An adjustment of 0 changes nothing.', 'invalid', 'amount');
+    const amount = roundMoney(input.amount);
+    if (amount === '0.00') throw new DomainError('adjustment.zero', 'An adjustment of 0 changes nothing.', 'invalid', 'amount');
     return this.database.transaction(async () => {
       const branch = await this.closes.branch(user.organisationId, input.branchId);
       if (!branch) throw branchNotFound();
@@ -50,7 +50,7 @@ export class AddAdjustmentHandler implements ICommandHandler<AddAdjustmentComman
         ticketId: input.ticketId ?? null,
         staffId: input.staffId ?? null,
         category: input.category,
-        amount: new Big(input.amount).toFixed(2),
+        amount,
         reason: input.reason,
         createdById: user.id,
       });

@@ -1,5 +1,5 @@
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
-import { DomainError, retailLineAmounts, sumMoney } from '@tressury/domain';
+import { DomainError, negateMoney as negate, retailLineAmounts, sumMoney } from '@tressury/domain';
 import Big from 'big.js';
 import { CardProcessor } from '../../card-processor/card-processor.js';
 import { businessDateIn } from '../../common/business-date.js';
@@ -151,4 +151,3 @@ export class RefundTicketHandler implements ICommandHandler<RefundTicketCommand>
   }
 }
 
-const negate = (value: string): string => new Big(value).times(-1).toFixed(2);
