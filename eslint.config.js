@@ -9,7 +9,7 @@ const webBoundaries = [
 ];
 
 // card-processor is infrastructure (like database and events): any feature may call it.
-const featureFolders = ['auth', 'authz', 'branches', 'organisation', 'health', 'seed', 'catalogue', 'staff', 'clients', 'tickets', 'day-close'];
+const featureFolders = ['auth', 'authz', 'branches', 'organisation', 'health', 'seed', 'catalogue', 'staff', 'clients', 'tickets', 'day-close', 'payroll'];
 
 export default tseslint.config(
   { ignores: ['**/dist/**', '**/node_modules/**', 'apps/web/src/lib/api-schema.d.ts', 'drizzle/migrations/**', 'tests/output/**', 'data/**'] },

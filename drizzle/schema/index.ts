@@ -8,3 +8,4 @@ export * from './staff.js';
 export * from './clients.js';
 export * from './tickets.js';
 export * from './day-close.js';
+export * from './payroll.js';

@@ -11,6 +11,7 @@ import { CardProcessorModule } from './card-processor/card-processor.module.js';
 import { CatalogueModule } from './catalogue/catalogue.module.js';
 import { ClientsModule } from './clients/clients.module.js';
 import { DayCloseModule } from './day-close/day-close.module.js';
+import { PayrollModule } from './payroll/payroll.module.js';
 import { StaffModule } from './staff/staff.module.js';
 import { TicketsModule } from './tickets/tickets.module.js';
 import { parseConfig } from './config.js';
@@ -35,6 +36,7 @@ const features = [
   CardProcessorModule,
   TicketsModule,
   DayCloseModule,
+  PayrollModule,
   SeedModule,
 ];
 

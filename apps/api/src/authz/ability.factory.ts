@@ -6,6 +6,7 @@ import { defineBranchRules } from '../branches/branches.policies.js';
 import { defineCatalogueRules } from '../catalogue/catalogue.policies.js';
 import { defineClientRules } from '../clients/clients.policies.js';
 import { defineDayCloseRules } from '../day-close/day-close.policies.js';
+import { definePayrollRules } from '../payroll/payroll.policies.js';
 import { defineStaffRules } from '../staff/staff.policies.js';
 import { defineTicketRules } from '../tickets/tickets.policies.js';
 import { defineOrganisationRules } from '../organisation/organisation.policies.js';
@@ -20,6 +21,7 @@ const featureRules: DefineRules[] = [
   defineClientRules,
   defineTicketRules,
   defineDayCloseRules,
+  definePayrollRules,
 ];
 
 /** The one place abilities are built; the web receives the same rules packed in /auth/me. */

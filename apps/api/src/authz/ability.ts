@@ -18,6 +18,14 @@ type Records = {
   /** `staffIds`: the staff with a service line on this ticket. */
   Ticket: { id: string; organisationId: string; branchId: string; staffIds: string[] };
   DayClose: { organisationId: string; branchId: string };
+  PayPlan: { organisationId: string };
+  /** The pay schedule and its pay periods. */
+  PaySchedule: { organisationId: string };
+  /** `branchId`: where the hours were worked. */
+  Timesheet: { organisationId: string; branchId: string; staffId: string };
+  PayrollRun: { organisationId: string };
+  /** One staff member's pay in a run; `branchId` is their home branch, `runStatus` the run's status. */
+  PayrollLine: { organisationId: string; branchId: string; staffId: string; runStatus: string };
 };
 type Tagged = { [N in keyof Records]: ForcedSubject<N> & Records[N] }[keyof Records];
 

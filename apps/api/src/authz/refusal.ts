@@ -33,6 +33,11 @@ const subjectLabel: Record<SubjectName, string> = {
   Client: 'client records',
   Ticket: 'tickets',
   DayClose: 'day closes',
+  PayPlan: 'pay plans',
+  PaySchedule: 'the pay schedule and pay periods',
+  Timesheet: 'timesheet hours',
+  PayrollRun: 'payroll runs',
+  PayrollLine: 'payroll figures',
   all: 'this',
 };
 

@@ -656,6 +656,289 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/payroll/plans": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Commission plans with every version of their terms and who is on them (owner, accountant). */
+        get: operations["PayPlansController_list"];
+        put?: never;
+        /** A new plan with its first terms, effective from the first day of a pay period (owner). */
+        post: operations["PayPlansController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/plans/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PayPlansController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/plans/{id}/versions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** New terms from a later pay period; runs already computed keep the terms they stored (owner). */
+        post: operations["PayPlansController_addVersion"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/plans/{id}/assignments": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Puts a staff member on this plan from the first day of a pay period (owner). */
+        post: operations["PayPlansController_assign"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/schedule": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        /** Sets the pay frequency, anchor date and workweek start; fixed once the first period exists (owner). */
+        put: operations["PayCalendarController_setSchedule"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/periods": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The schedule, the period holding today, the next one to create, and the stored periods with their runs. */
+        get: operations["PayCalendarController_listPeriods"];
+        put?: never;
+        /** Creates the next pay period, or the one holding `date` (owner, accountant). */
+        post: operations["PayCalendarController_createPeriod"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/timesheets": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        /** Sets one staff member's hours for one day at one branch (owner; a manager for their branches). */
+        put: operations["TimesheetsController_setHours"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/periods/{id}/timesheets": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The hours entered in a pay period that the caller may see. */
+        get: operations["TimesheetsController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/periods/{id}/timesheets/import": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Preview or commit a timesheet for the pay period
+         * @description Headings: `staff_id`, `date` (YYYY-MM-DD, inside the period), `hours` (0 to 24, at most 3 decimals); optional `branch_id` (the staff member's home branch when left out). One row per staff member, branch and day.
+         *
+         *     A .csv (UTF-8) or .xlsx file in the multipart field `file`, at most 2000 rows.
+         *
+         *     Without `commit=true` nothing is written and every row comes back with its errors. With `commit=true` all rows are written in one transaction, or, if any row is bad, nothing is and the answer is a 400 whose `details` name each row and column.
+         */
+        post: operations["TimesheetsController_import"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/periods/{id}/runs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Starts the period's payroll run, replacing a draft (409 once approved). Answers 202 at once; poll
+         *     GET /payroll/runs/:id until its status leaves `computing` (owner, accountant).
+         */
+        post: operations["PayrollRunsController_start"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/runs/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The run's status and progress (processed of total staff). */
+        get: operations["PayrollRunsController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/runs/{id}/approve": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Freezes a draft run (owner, accountant); any later change answers 409. */
+        post: operations["PayrollRunsController_approve"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/runs/{id}/lines": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The run's lines the caller may see: all (owner, accountant), their branches' drafts (manager), their own (stylist). */
+        get: operations["PayrollRunsController_lines"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/runs/{id}/lines/{lineId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One line with its stored input and every figure of the computation (tier breakdown, workweeks). */
+        get: operations["PayrollRunsController_line"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/runs/{id}/workbook": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The accountant's workbook of an approved run (Summary, one sheet per branch, Lines); marks the run exported. */
+        get: operations["PayrollRunsController_workbook"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/runs/{id}/summary.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The Summary of an approved run as CSV, every field quoted; marks the run exported. */
+        get: operations["PayrollRunsController_summaryCsv"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -1559,6 +1842,231 @@ export interface components {
             /** @description Positive adds, negative takes away; not zero. */
             amount: string;
             reason: string;
+        };
+        PayPlanVersionView: {
+            id: string;
+            effectiveFrom: string;
+            /** @enum {string} */
+            tierMode: "marginal" | "whole-period";
+            tiers: {
+                from: string;
+                rate: string;
+            }[];
+            productCharge: {
+                /** @enum {string} */
+                mode: "none" | "actual-cost" | "percent-of-price" | "fixed-per-colour-service";
+                value: string | null;
+                markup: string | null;
+            };
+            retailRate: string;
+            hourlyRate: string | null;
+        };
+        PayPlanAssignmentView: {
+            staffId: string;
+            effectiveFrom: string;
+        };
+        PayPlanView: {
+            id: string;
+            name: string;
+            /** @description Every version, earliest first. */
+            versions: components["schemas"]["PayPlanVersionView"][];
+            /** @description Staff put on this plan, by the first day it applies. */
+            assignments: components["schemas"]["PayPlanAssignmentView"][];
+        };
+        TierDto: {
+            /** @description Commissionable service revenue in the pay period from which this rate applies, decimal string; the first tier starts at "0". */
+            from: string;
+            /** @description Commission rate as a fraction, decimal string ("0.40" = 40 %). */
+            rate: string;
+        };
+        ProductChargeDto: {
+            /**
+             * @description How colour product is charged back before commission.
+             * @enum {string}
+             */
+            mode: "none" | "actual-cost" | "percent-of-price" | "fixed-per-colour-service";
+            /** @description percent-of-price: the fraction of price; fixed-per-colour-service: the amount. Decimal string. */
+            value?: string;
+            /** @description actual-cost: markup on the cost as a fraction ("0.10" = cost + 10 %). Decimal string. */
+            markup?: string;
+        };
+        PayPlanTermsDto: {
+            /** @description The first day of a pay period under the pay schedule, YYYY-MM-DD. */
+            effectiveFrom: string;
+            /**
+             * @description marginal: each band at its own rate; whole-period: all revenue at the rate of the highest tier reached.
+             * @enum {string}
+             */
+            tierMode: "marginal" | "whole-period";
+            tiers: components["schemas"]["TierDto"][];
+            productCharge: components["schemas"]["ProductChargeDto"];
+            /** @description Commission on retail sales as a fraction, decimal string. */
+            retailRate: string;
+            /** @description Paid for every hour worked on top of commission, decimal string; a staff member's own hourly rate takes precedence. */
+            hourlyRate?: string;
+        };
+        CreatePayPlanDto: {
+            name: string;
+            /** @description The plan's first terms. */
+            terms: components["schemas"]["PayPlanTermsDto"];
+        };
+        AssignPayPlanDto: {
+            /** Format: uuid */
+            staffId: string;
+            /** @description The first day of a pay period, YYYY-MM-DD: the staff member is paid on this plan from that period on. */
+            effectiveFrom: string;
+        };
+        SetPayScheduleDto: {
+            /** @enum {string} */
+            frequency: "weekly" | "biweekly" | "semi-monthly";
+            /** @description The first day of any one pay period (weekly, biweekly), YYYY-MM-DD; semi-monthly periods always start on the 1st and 16th. */
+            anchorDate: string;
+            /** @description The day workweeks begin for overtime, 0 = Sunday … 6 = Saturday. */
+            workweekStartsOn: number;
+        };
+        PayScheduleView: {
+            /** @enum {string} */
+            frequency: "weekly" | "biweekly" | "semi-monthly";
+            anchorDate: string;
+            /** @description 0 = Sunday … 6 = Saturday. */
+            workweekStartsOn: number;
+        };
+        PeriodRangeView: {
+            startDate: string;
+            endDate: string;
+        };
+        PayPeriodView: {
+            id: string;
+            startDate: string;
+            endDate: string;
+            /** @description The period's payroll run, if one was started. */
+            runId: string | null;
+            /** @enum {string|null} */
+            runStatus: "draft" | "failed" | "computing" | "approved" | "exported" | null;
+        };
+        PayPeriodsView: {
+            /** @description Null until the owner sets it. */
+            schedule: components["schemas"]["PayScheduleView"] | null;
+            /** @description The period holding today (UTC), stored or not. */
+            current: components["schemas"]["PeriodRangeView"] | null;
+            /** @description The period that POST /api/payroll/periods would create without a date. */
+            next: components["schemas"]["PeriodRangeView"] | null;
+            /** @description Stored periods, latest first (at most 26). */
+            periods: components["schemas"]["PayPeriodView"][];
+        };
+        CreatePayPeriodDto: {
+            /** @description A day inside the period to create, YYYY-MM-DD; left out: the period after the latest one (or the one holding today). */
+            date?: string;
+        };
+        SetTimesheetHoursDto: {
+            /** Format: uuid */
+            staffId: string;
+            /**
+             * Format: uuid
+             * @description Where the hours were worked; left out: the staff member's home branch.
+             */
+            branchId?: string;
+            /** @description The work day, YYYY-MM-DD. */
+            date: string;
+            /** @description Hours worked that day, decimal string from "0" to "24"; "0" clears the day. */
+            hours: string;
+        };
+        TimesheetEntryView: {
+            id: string;
+            staffId: string;
+            staffName: string;
+            branchId: string;
+            date: string;
+            /** @description Decimal string. */
+            hours: string;
+            updatedAt: string;
+        };
+        TimesheetCellErrorView: {
+            /** @description The column heading of the bad cell (staff_id, branch_id, date, hours). */
+            field: string;
+            message: string;
+        };
+        TimesheetImportRowView: {
+            values: {
+                [key: string]: string;
+            };
+            /** @description The row number as the spreadsheet shows it; the header is row 1. */
+            row: number;
+            /** @description Empty when the row is good. */
+            errors: components["schemas"]["TimesheetCellErrorView"][];
+        };
+        TimesheetImportView: {
+            /** @description True when the hours were written; false for a preview. */
+            committed: boolean;
+            rows: components["schemas"]["TimesheetImportRowView"][];
+            validRows: number;
+            invalidRows: number;
+        };
+        PayrollRunView: {
+            id: string;
+            periodId: string;
+            startDate: string;
+            endDate: string;
+            /**
+             * @description computing → draft (or failed) → approved → exported.
+             * @enum {string}
+             */
+            status: "draft" | "failed" | "computing" | "approved" | "exported";
+            /** @description Staff members to compute, and how many are done: poll until status is no longer computing. */
+            totalStaff: number;
+            processedStaff: number;
+            /** @description Why the run failed, when it did. */
+            error: string | null;
+            startedAt: string;
+            completedAt: string | null;
+            approvedAt: string | null;
+            exportedAt: string | null;
+        };
+        PayrollLineView: {
+            id: string;
+            runId: string;
+            staffId: string;
+            staffName: string;
+            branchId: string;
+            branchName: string;
+            hours: string;
+            serviceRevenue: string;
+            productCharge: string;
+            commissionableRevenue: string;
+            serviceCommission: string;
+            retailCommission: string;
+            hourlyPay: string;
+            tips: string;
+            minimumWageTopUp: string;
+            overtimePremium: string;
+            grossPay: string;
+        };
+        PayrollLineDetailView: {
+            /** @description The computePay input as stored when the run was computed. */
+            input: {
+                [key: string]: unknown;
+            };
+            /** @description The computePay result, with the tier breakdown and workweeks. */
+            result: {
+                [key: string]: unknown;
+            };
+            id: string;
+            runId: string;
+            staffId: string;
+            staffName: string;
+            branchId: string;
+            branchName: string;
+            hours: string;
+            serviceRevenue: string;
+            productCharge: string;
+            commissionableRevenue: string;
+            serviceCommission: string;
+            retailCommission: string;
+            hourlyPay: string;
+            tips: string;
+            minimumWageTopUp: string;
+            overtimePremium: string;
+            grossPay: string;
         };
     };
     responses: never;
@@ -2763,6 +3271,403 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["AdjustmentView"];
                 };
+            };
+        };
+    };
+    PayPlansController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayPlanView"][];
+                };
+            };
+        };
+    };
+    PayPlansController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreatePayPlanDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayPlanView"];
+                };
+            };
+        };
+    };
+    PayPlansController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayPlanView"];
+                };
+            };
+        };
+    };
+    PayPlansController_addVersion: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PayPlanTermsDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayPlanView"];
+                };
+            };
+        };
+    };
+    PayPlansController_assign: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AssignPayPlanDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayPlanView"];
+                };
+            };
+        };
+    };
+    PayCalendarController_setSchedule: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SetPayScheduleDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayScheduleView"];
+                };
+            };
+        };
+    };
+    PayCalendarController_listPeriods: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayPeriodsView"];
+                };
+            };
+        };
+    };
+    PayCalendarController_createPeriod: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreatePayPeriodDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayPeriodView"];
+                };
+            };
+        };
+    };
+    TimesheetsController_setHours: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SetTimesheetHoursDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TimesheetEntryView"];
+                };
+            };
+        };
+    };
+    TimesheetsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TimesheetEntryView"][];
+                };
+            };
+        };
+    };
+    TimesheetsController_import: {
+        parameters: {
+            query?: {
+                /** @description false (the default): check the file and answer with a preview. true: write every row, or nothing if any row is bad. */
+                commit?: boolean;
+            };
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TimesheetImportView"];
+                };
+            };
+        };
+    };
+    PayrollRunsController_start: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayrollRunView"];
+                };
+            };
+        };
+    };
+    PayrollRunsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayrollRunView"];
+                };
+            };
+        };
+    };
+    PayrollRunsController_approve: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayrollRunView"];
+                };
+            };
+        };
+    };
+    PayrollRunsController_lines: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayrollLineView"][];
+                };
+            };
+        };
+    };
+    PayrollRunsController_line: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+                lineId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PayrollLineDetailView"];
+                };
+            };
+        };
+    };
+    PayrollRunsController_workbook: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PayrollRunsController_summaryCsv: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };

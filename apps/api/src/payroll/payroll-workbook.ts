@@ -1,0 +1,191 @@
+import { PassThrough } from 'node:stream';
+import type { PayInput } from '@tressury/domain';
+import type { PayrollLineRow } from '@tressury/schema';
+import Big from 'big.js';
+import ExcelJS from 'exceljs';
+
+// The one module that knows exceljs for payroll exports (STACK.md: unmaintained since 2023, keep it behind one module).
+
+export type PayrollExport = {
+  organisationName: string;
+  startDate: string;
+  endDate: string;
+  status: string;
+  lines: PayrollLineRow[];
+  /** ISO 4217 code per branch id, for the money formats. */
+  currencyOf: Map<string, string>;
+};
+
+export const PAY_RULES_NOTE =
+  'These figures follow the pay rules configured in Tressury (plans, branch minimum wage and overtime settings). Local law governs: have them confirmed by a payroll professional before paying.';
+
+type Column = { header: string; width: number; kind: 'text' | 'hours' | 'money'; value: (line: PayrollLineRow) => string };
+
+export const SUMMARY_COLUMNS: Column[] = [
+  { header: 'Staff ID', width: 38, kind: 'text', value: (l) => l.staffId },
+  { header: 'Name', width: 24, kind: 'text', value: (l) => l.staffName },
+  { header: 'Branch', width: 18, kind: 'text', value: (l) => l.branchName },
+  { header: 'Hours', width: 10, kind: 'hours', value: (l) => l.hours },
+  { header: 'Service revenue', width: 16, kind: 'money', value: (l) => l.serviceRevenue },
+  { header: 'Product charge', width: 16, kind: 'money', value: (l) => l.productCharge },
+  { header: 'Commissionable revenue', width: 16, kind: 'money', value: (l) => l.commissionableRevenue },
+  { header: 'Service commission', width: 16, kind: 'money', value: (l) => l.serviceCommission },
+  { header: 'Retail commission', width: 16, kind: 'money', value: (l) => l.retailCommission },
+  { header: 'Hourly pay', width: 14, kind: 'money', value: (l) => l.hourlyPay },
+  { header: 'Tips', width: 14, kind: 'money', value: (l) => l.tips },
+  { header: 'Minimum-wage top-up', width: 16, kind: 'money', value: (l) => l.minimumWageTopUp },
+  { header: 'Overtime premium', width: 16, kind: 'money', value: (l) => l.overtimePremium },
+  { header: 'Gross pay', width: 16, kind: 'money', value: (l) => l.grossPay },
+];
+
+/** The header row of the Summary and branch sheets; data starts on the row after it. */
+export const HEADER_ROW = 4;
+
+const HOURS_FORMAT = '#,##0.00#';
+const DATE_FORMAT = 'yyyy-mm-dd';
+const moneyFormat = (currency: string | undefined) => (currency ? `#,##0.00 "${currency}";-#,##0.00 "${currency}"` : '#,##0.00;-#,##0.00');
+
+/**
+ * A text cell that a spreadsheet program could take for a formula (it begins with = + - @, a tab, a
+ * carriage return, a line feed or another control character) is prefixed with an apostrophe, as OWASP's
+ * "CSV Injection" page advises; every other text is left as it is.
+ */
+export function neutralise(text: string): string {
+  // eslint-disable-next-line no-control-regex
+  return /^[=+\-@\u0000-\u001f]/.test(text) ? `'${text}` : text;
+}
+
+/** e.g. Thistlewick-Hair-Collective-payroll-2026-11-02-to-2026-11-15.xlsx */
+export function exportFileName(organisationName: string, startDate: string, endDate: string, extension: 'xlsx' | 'csv', suffix = ''): string {
+  const name = organisationName.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'organisation';
+  return `${name}-payroll${suffix}-${startDate}-to-${endDate}.${extension}`;
+}
+
+const utcDate = (date: string): Date => {
+  const [y, m, d] = date.split('-').map(Number) as [number, number, number];
+  // exceljs writes dates as UTC wall-clock time (STACK.md), so the calendar day is built in UTC.
+  return new Date(Date.UTC(y, m - 1, d));
+};
+
+const columnLetter = (index: number): string => {
+  let n = index + 1;
+  let letters = '';
+  while (n > 0) {
+    const r = (n - 1) % 26;
+    letters = String.fromCharCode(65 + r) + letters;
+    n = Math.floor((n - 1) / 26);
+  }
+  return letters;
+};
+
+const sheetName = (name: string, taken: Set<string>): string => {
+  const base = name.replace(/[[\]:*?/\\]/g, ' ').trim().slice(0, 28) || 'Branch';
+  let candidate = base;
+  for (let i = 2; taken.has(candidate.toLowerCase()); i++) candidate = `${base.slice(0, 26)} ${i}`;
+  taken.add(candidate.toLowerCase());
+  return candidate;
+};
+
+/** The accountant's workbook: Summary, one sheet per branch, and the Lines behind the figures; written with exceljs's streaming writer. */
+export async function writePayrollWorkbook(data: PayrollExport): Promise<Buffer> {
+  const stream = new PassThrough();
+  const chunks: Buffer[] = [];
+  stream.on('data', (chunk: Buffer) => chunks.push(chunk));
+  const done = new Promise<void>((resolve, reject) => {
+    stream.on('end', resolve);
+    stream.on('error', reject);
+  });
+  const workbook = new ExcelJS.stream.xlsx.WorkbookWriter({ stream, useStyles: true, useSharedStrings: false });
+  workbook.creator = 'Tressury';
+
+  const currencies = new Set(data.lines.map((l) => data.currencyOf.get(l.branchId)));
+  const totalCurrency = currencies.size === 1 ? [...currencies][0] : undefined;
+  const taken = new Set<string>(['summary', 'lines']);
+
+  writeFigureSheet(workbook.addWorksheet('Summary', { views: [{ state: 'frozen', ySplit: HEADER_ROW, xSplit: 2 }] }), data, data.lines, 'All branches', totalCurrency);
+  const branchIds = [...new Set(data.lines.map((l) => l.branchId))];
+  const byBranch = branchIds
+    .map((id) => data.lines.filter((l) => l.branchId === id))
+    .sort((a, b) => a[0]!.branchName.localeCompare(b[0]!.branchName));
+  for (const lines of byBranch) {
+    const name = sheetName(lines[0]!.branchName, taken);
+    writeFigureSheet(workbook.addWorksheet(name, { views: [{ state: 'frozen', ySplit: HEADER_ROW, xSplit: 2 }] }), data, lines, lines[0]!.branchName, data.currencyOf.get(lines[0]!.branchId));
+  }
+  writeLinesSheet(workbook.addWorksheet('Lines', { views: [{ state: 'frozen', ySplit: 1 }] }), data);
+  await workbook.commit();
+  await done;
+  return Buffer.concat(chunks);
+}
+
+function writeFigureSheet(sheet: ExcelJS.Worksheet, data: PayrollExport, lines: PayrollLineRow[], scope: string, totalCurrency: string | undefined): void {
+  sheet.columns = SUMMARY_COLUMNS.map((c) => ({ width: c.width }));
+  sheet.addRow([neutralise(`Payroll ${data.startDate} to ${data.endDate} — ${data.organisationName} — ${scope} (${data.status})`)]).commit();
+  sheet.addRow([PAY_RULES_NOTE]).commit();
+  sheet.addRow([]).commit();
+  const header = sheet.addRow(SUMMARY_COLUMNS.map((c) => c.header));
+  header.font = { bold: true };
+  header.commit();
+  for (const line of lines) {
+    const currency = data.currencyOf.get(line.branchId);
+    const row = sheet.addRow(SUMMARY_COLUMNS.map((c) => (c.kind === 'text' ? neutralise(c.value(line)) : Number(c.value(line)))));
+    SUMMARY_COLUMNS.forEach((c, i) => {
+      if (c.kind !== 'text') row.getCell(i + 1).numFmt = c.kind === 'hours' ? HOURS_FORMAT : moneyFormat(currency);
+    });
+    row.commit();
+  }
+  const first = HEADER_ROW + 1;
+  const last = HEADER_ROW + lines.length;
+  const totals = sheet.addRow(
+    SUMMARY_COLUMNS.map((c, i) => {
+      if (i === 0) return 'Total';
+      if (c.kind === 'text') return null;
+      // The cached result is the exact sum of the rounded figures, so the sheet adds up to the cent.
+      const result = lines.reduce((sum, l) => sum.plus(c.value(l)), new Big(0));
+      const letter = columnLetter(i);
+      return { formula: `SUM(${letter}${first}:${letter}${Math.max(last, first)})`, result: Number(result.toFixed(c.kind === 'hours' ? 3 : 2)) };
+    }),
+  );
+  totals.font = { bold: true };
+  SUMMARY_COLUMNS.forEach((c, i) => {
+    if (c.kind !== 'text') totals.getCell(i + 1).numFmt = c.kind === 'hours' ? HOURS_FORMAT : moneyFormat(totalCurrency);
+  });
+  totals.commit();
+  sheet.commit();
+}
+
+export const LINES_COLUMNS = ['Staff ID', 'Name', 'Branch', 'Kind', 'Line ID', 'Date', 'Colour service', 'Price or amount', 'Stylist share', 'Product cost'];
+
+function writeLinesSheet(sheet: ExcelJS.Worksheet, data: PayrollExport): void {
+  sheet.columns = [38, 24, 18, 9, 48, 12, 9, 16, 10, 14].map((width) => ({ width }));
+  const header = sheet.addRow(LINES_COLUMNS);
+  header.font = { bold: true };
+  header.commit();
+  for (const line of data.lines) {
+    const currency = moneyFormat(data.currencyOf.get(line.branchId));
+    const input = line.input as PayInput;
+    const who = [neutralise(line.staffId), neutralise(line.staffName), neutralise(line.branchName)];
+    for (const s of input.serviceLines) {
+      const row = sheet.addRow([...who, 'service', neutralise(s.id), utcDate(s.date), s.isColour ? 'yes' : 'no', Number(s.price), Number(s.share ?? '1'), Number(s.productCost)]);
+      row.getCell(6).numFmt = DATE_FORMAT;
+      row.getCell(8).numFmt = currency;
+      row.getCell(9).numFmt = '0.00##';
+      row.getCell(10).numFmt = currency;
+      row.commit();
+    }
+    for (const r of input.retailLines) {
+      const row = sheet.addRow([...who, 'retail', neutralise(r.id), utcDate(r.date), null, Number(r.amount), null, null]);
+      row.getCell(6).numFmt = DATE_FORMAT;
+      row.getCell(8).numFmt = currency;
+      row.commit();
+    }
+  }
+  sheet.commit();
+}
+
+const csvField = (value: string): string => `"${value.replaceAll('"', '""')}"`;
+
+/** The Summary as CSV: every field quoted, text neutralised as in the workbook, money as decimal strings. */
+export function writeSummaryCsv(data: PayrollExport): string {
+  const rows = [SUMMARY_COLUMNS.map((c) => c.header), ...data.lines.map((l) => SUMMARY_COLUMNS.map((c) => (c.kind === 'text' ? neutralise(c.value(l)) : c.value(l))))];
+  return rows.map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n';
+}

@@ -1,0 +1,9 @@
+import { Query } from '@nestjs/cqrs';
+import type { AuthUser } from '../../auth/auth-user.js';
+import type { PayPlanView } from '../dto/pay-plan.view.js';
+
+export class ListPayPlansQuery extends Query<PayPlanView[]> {
+  constructor(readonly user: AuthUser) {
+    super();
+  }
+}
