@@ -17,7 +17,7 @@ import { ProductView } from './dto/product.view.js';
 import { UpdateProductDto } from './dto/update-product.dto.js';
 import { GetProductQuery } from './queries/get-product.query.js';
 import { ListProductsQuery } from './queries/list-products.query.js';
-import { SpreadsheetUploadInterceptor } from './spreadsheet-upload.interceptor.js';
+import { SpreadsheetUploadInterceptor } from '../common/spreadsheet-upload.interceptor.js';
 import { SpreadsheetUploadDocs } from './upload-docs.js';
 
 @ApiTags('catalogue')

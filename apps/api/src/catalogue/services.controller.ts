@@ -17,7 +17,7 @@ import { ServiceView } from './dto/service.view.js';
 import { UpdateServiceDto } from './dto/update-service.dto.js';
 import { GetServiceQuery } from './queries/get-service.query.js';
 import { ListServicesQuery } from './queries/list-services.query.js';
-import { SpreadsheetUploadInterceptor } from './spreadsheet-upload.interceptor.js';
+import { SpreadsheetUploadInterceptor } from '../common/spreadsheet-upload.interceptor.js';
 import { SpreadsheetUploadDocs } from './upload-docs.js';
 
 @ApiTags('catalogue')

@@ -13,7 +13,7 @@ import { SetTimesheetHoursDto } from './dto/set-timesheet-hours.dto.js';
 import { TimesheetEntryView } from './dto/timesheet-entry.view.js';
 import { TimesheetImportView } from './dto/timesheet-import.view.js';
 import { ListTimesheetEntriesQuery } from './queries/list-timesheet-entries.query.js';
-import { TimesheetUploadInterceptor } from './timesheet-upload.interceptor.js';
+import { SpreadsheetUploadInterceptor } from '../common/spreadsheet-upload.interceptor.js';
 
 @ApiTags('payroll')
 @ApiBearerAuth()
@@ -41,7 +41,7 @@ export class TimesheetsController {
   @Post('periods/:id/timesheets/import')
   @HttpCode(200)
   @CheckPolicies('update', 'Timesheet')
-  @UseInterceptors(TimesheetUploadInterceptor)
+  @UseInterceptors(SpreadsheetUploadInterceptor)
   @ApiOperation({
     summary: 'Preview or commit a timesheet for the pay period',
     description: [
