@@ -1,4 +1,5 @@
 import { AsyncLocalStorage } from 'node:async_hooks';
+import { sql } from 'drizzle-orm';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
 import type * as schema from '@tressury/schema';
 
@@ -34,6 +35,15 @@ export class Database {
     const result = await this.root.transaction((tx) => this.unitOfWork.run({ tx: tx as unknown as Db, afterCommit }, work));
     for (const hook of afterCommit) hook();
     return result;
+  }
+
+  /**
+   * Holds a branch's business date until the current transaction ends. Opening a ticket and closing
+   * the day both take it, so no ticket opens on a day while that day is being closed.
+   */
+  async lockBranchDay(branchId: string, businessDate: string): Promise<void> {
+    if (!this.inTransaction) throw new Error('lockBranchDay must run inside a transaction');
+    await this.db.execute(sql`select pg_advisory_xact_lock(hashtext(${`${branchId}:${businessDate}`}))`);
   }
 
   /** Defers `hook` until the current transaction commits (runs at once outside a transaction). */

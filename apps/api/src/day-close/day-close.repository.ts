@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { adjustments, branches, dayCloses, staff, tickets, type AdjustmentRow, type BranchRow, type DayCloseRow } from '@tressury/schema';
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { Database } from '../database/database.js';
 
 @Injectable()
@@ -20,10 +20,6 @@ export class DayCloseRepository {
     return row ?? null;
   }
 
-  /** The same lock ticket opening takes: no ticket opens on a day while it is being closed. */
-  async lockBranchDay(branchId: string, businessDate: string): Promise<void> {
-    await this.database.db.execute(sql`select pg_advisory_xact_lock(hashtext(${`${branchId}:${businessDate}`}))`);
-  }
 
   async insert(values: typeof dayCloses.$inferInsert): Promise<DayCloseRow> {
     const [row] = await this.database.db.insert(dayCloses).values(values).returning();

@@ -21,7 +21,7 @@ import {
   type TicketServiceLineRow,
   type TipRow,
 } from '@tressury/schema';
-import { and, asc, eq, inArray, max, sql } from 'drizzle-orm';
+import { and, asc, eq, inArray, max } from 'drizzle-orm';
 import { Database } from '../database/database.js';
 import { inTurn } from '../database/in-turn.js';
 
@@ -102,10 +102,6 @@ export class TicketsRepository {
     return rows.length > 0;
   }
 
-  /** Serialises ticket numbering and day closing for one branch day until the transaction ends. */
-  async lockBranchDay(branchId: string, businessDate: string): Promise<void> {
-    await this.database.db.execute(sql`select pg_advisory_xact_lock(hashtext(${`${branchId}:${businessDate}`}))`);
-  }
 
   async nextNumber(branchId: string, businessDate: string): Promise<number> {
     const [row] = await this.database.db

@@ -29,7 +29,7 @@ export class AddAdjustmentHandler implements ICommandHandler<AddAdjustmentComman
       if (!branch) throw branchNotFound();
       assertCan(this.abilities.createFor(user), user.role, 'create', 'DayClose', { organisationId: branch.organisationId, branchId: branch.id }, branchNotFound);
       const bookedOn = businessDateIn(branch.timeZone);
-      await this.closes.lockBranchDay(branch.id, bookedOn);
+      await this.database.lockBranchDay(branch.id, bookedOn);
       if (await this.closes.find(branch.id, bookedOn)) {
         throw new DomainError('day.locked', `Today (${bookedOn}) is already closed at ${branch.name}; book the adjustment tomorrow.`, 'conflict');
       }

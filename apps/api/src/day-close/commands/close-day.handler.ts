@@ -39,7 +39,7 @@ export class CloseDayHandler implements ICommandHandler<CloseDayCommand> {
     const cardTotalProcessor = await this.preview.processorTotal(branch, input.businessDate);
 
     const close = await this.database.transaction(async () => {
-      await this.closes.lockBranchDay(branch.id, input.businessDate);
+      await this.database.lockBranchDay(branch.id, input.businessDate);
       if (await this.closes.find(branch.id, input.businessDate)) throw cannotClose('already_closed', `${branch.name} ${input.businessDate} is already closed.`);
       const day = await this.figures.forDay(branch.id, input.businessDate);
       if (day.openTickets.length > 0) {

@@ -36,7 +36,7 @@ export class OpenTicketHandler implements ICommandHandler<OpenTicketCommand> {
         throw invalidReference('clientId', 'No such client.');
       }
       const businessDate = businessDateIn(branch.timeZone);
-      await this.tickets.lockBranchDay(branch.id, businessDate);
+      await this.database.lockBranchDay(branch.id, businessDate);
       if (await this.tickets.isDayClosed(branch.id, businessDate)) throw dayLocked(businessDate);
       const ticket = await this.tickets.insertTicket({
         organisationId: user.organisationId,

@@ -1,8 +1,8 @@
 import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
 import { AbilityFactory } from '../../authz/ability.factory.js';
 import { assertCan } from '../../authz/refusal.js';
-import type { TicketView } from '../dto/ticket.view.js';
-import { TicketEditing } from '../ticket-editing.js';
+import { type TicketView, toTicketView } from '../dto/ticket.view.js';
+import { patchTestNeeded } from '../ticket-editing.js';
 import { ticketNotFound } from '../ticket-errors.js';
 import { TicketsRepository } from '../tickets.repository.js';
 import { GetTicketQuery } from './get-ticket.query.js';
@@ -11,7 +11,6 @@ import { GetTicketQuery } from './get-ticket.query.js';
 export class GetTicketHandler implements IQueryHandler<GetTicketQuery> {
   constructor(
     private readonly tickets: TicketsRepository,
-    private readonly editing: TicketEditing,
     private readonly abilities: AbilityFactory,
   ) {}
 
@@ -19,6 +18,6 @@ export class GetTicketHandler implements IQueryHandler<GetTicketQuery> {
     const loaded = await this.tickets.load(user.organisationId, ticketId);
     if (!loaded) throw ticketNotFound();
     assertCan(this.abilities.createFor(user), user.role, 'read', 'Ticket', { ...loaded.ticket, staffIds: loaded.staffIds }, ticketNotFound);
-    return this.editing.view(user.organisationId, ticketId);
+    return toTicketView(loaded, patchTestNeeded(loaded));
   }
 }
