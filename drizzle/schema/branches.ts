@@ -18,6 +18,9 @@ export const branches = pgTable(
     varianceNoteThreshold: numeric('variance_note_threshold', { precision: 12, scale: 2 }).notNull().default('5.00'),
     /** How old a client's patch test may be before colour needs an explicit acknowledgement. */
     patchTestMaxAgeDays: integer('patch_test_max_age_days').notNull().default(180),
+    /** Franchise fees as fractions of the branch's gross sales (0.06 = 6 %), billed monthly. */
+    royaltyRate: numeric('royalty_rate', { precision: 12, scale: 5 }).notNull().default('0'),
+    marketingFundRate: numeric('marketing_fund_rate', { precision: 12, scale: 5 }).notNull().default('0'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -9,3 +9,4 @@ export * from './clients.js';
 export * from './tickets.js';
 export * from './day-close.js';
 export * from './payroll.js';
+export * from './mail.js';

@@ -122,6 +122,8 @@ export const payrollRuns = pgTable(
     startedById: uuid('started_by_id').notNull().references(() => users.id),
     startedAt: timestamp('started_at', { withTimezone: true }).notNull().defaultNow(),
     completedAt: timestamp('completed_at', { withTimezone: true }),
+    /** Renewed by the instance computing the run; a computing run whose heartbeat is old has stalled. */
+    heartbeatAt: timestamp('heartbeat_at', { withTimezone: true }),
     approvedById: uuid('approved_by_id').references(() => users.id),
     approvedAt: timestamp('approved_at', { withTimezone: true }),
     exportedById: uuid('exported_by_id').references(() => users.id),

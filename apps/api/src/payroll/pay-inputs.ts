@@ -46,7 +46,8 @@ const plain = (value: string): string => new Big(value).toFixed();
 export class PayInputsReader {
   constructor(private readonly database: Database) {}
 
-  async forPeriod(organisationId: string, period: PayPeriodRow, schedule: PayScheduleRow): Promise<StaffPayInput[]> {
+  /** `staffId` narrows the result to one staff member (a stylist's own earnings). */
+  async forPeriod(organisationId: string, period: PayPeriodRow, schedule: PayScheduleRow, options: { staffId?: string } = {}): Promise<StaffPayInput[]> {
     const activity = new Map<string, Activity>();
     const of = (staffId: string): Activity => {
       let found = activity.get(staffId);
@@ -151,6 +152,7 @@ export class PayInputsReader {
       .orderBy(asc(timesheetEntries.workDate), asc(timesheetEntries.staffId), asc(timesheetEntries.branchId));
     for (const entry of hourRows) if (new Big(entry.hours).gt(0)) of(entry.staffId).hours.push({ date: entry.date, hours: plain(entry.hours) });
 
+    if (options.staffId) for (const id of [...activity.keys()]) if (id !== options.staffId) activity.delete(id);
     if (activity.size === 0) return [];
     const staffIds = [...activity.keys()];
     const staffRows = await db.select().from(staff).where(inArray(staff.id, staffIds));
