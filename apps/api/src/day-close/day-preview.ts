@@ -22,16 +22,18 @@ export class DayPreview {
     return this.processor.cardTotalBetween({ from, to, currency: branch.currency, metadata: { branchId: branch.id } });
   }
 
-  async build(branch: BranchRow, businessDate: string, cardTotalProcessor: string): Promise<DayPreviewView> {
+  /** A closed day shows the processor total stored at its close; an open day asks the processor (outside any transaction). */
+  async build(branch: BranchRow, businessDate: string): Promise<DayPreviewView> {
     const figures = await this.figures.forDay(branch.id, businessDate);
     const close = await this.closes.find(branch.id, businessDate);
+    const cardTotalProcessor = close ? close.cardTotalProcessor : await this.processorTotal(branch, businessDate);
     return {
       branchId: branch.id,
       branchName: branch.name,
       businessDate,
       close: close ? toDayCloseView(close) : null,
       ...figures,
-      cardTotalProcessor: close ? close.cardTotalProcessor : cardTotalProcessor,
+      cardTotalProcessor,
       varianceNoteThreshold: branch.varianceNoteThreshold,
       readyToClose: !close && figures.ticketsByStatus.open === 0 && figures.pendingCardPayments === 0,
     };

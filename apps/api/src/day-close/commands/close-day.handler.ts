@@ -80,6 +80,6 @@ export class CloseDayHandler implements ICommandHandler<CloseDayCommand> {
       await this.events.append(new DayClosed(branch.organisationId, row.id, user.id, { branchId: branch.id, businessDate: input.businessDate, ...reconciled, figures: day }));
       return row;
     });
-    return this.preview.build(branch, close.businessDate, close.cardTotalProcessor);
+    return this.preview.build(branch, close.businessDate);
   }
 }

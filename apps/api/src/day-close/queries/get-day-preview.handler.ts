@@ -19,6 +19,6 @@ export class GetDayPreviewHandler implements IQueryHandler<GetDayPreviewQuery> {
     const branch = await this.closes.branch(user.organisationId, branchId);
     if (!branch) throw branchNotFound();
     assertCan(this.abilities.createFor(user), user.role, 'read', 'DayClose', { organisationId: branch.organisationId, branchId: branch.id }, branchNotFound);
-    return this.preview.build(branch, businessDate, await this.preview.processorTotal(branch, businessDate));
+    return this.preview.build(branch, businessDate);
   }
 }
