@@ -130,6 +130,114 @@ describe('demo business', () => {
     });
   });
 
+  describe('payroll', () => {
+    type Period = { id: string; startDate: string; endDate: string; runId: string | null; runStatus: string | null };
+    type Line = { id: string; staffId: string; staffName: string; hours: string; serviceRevenue: string; minimumWageTopUp: string; overtimePremium: string; grossPay: string };
+    let periods: Period[];
+    const cents = (value: string) => Math.round(Number(value) * 100);
+
+    beforeAll(async () => {
+      const listed = (await t.http().get('/api/payroll/periods').set('Authorization', await auth('accountant')).expect(200)).body;
+      expect(listed.schedule).toMatchObject({ frequency: 'biweekly', workweekStartsOn: 0 });
+      expect(listed.current).toEqual({ startDate: listed.periods[0].startDate, endDate: listed.periods[0].endDate });
+      periods = [...listed.periods].reverse();
+    });
+
+    it('has biweekly periods from Sunday to Saturday tiling the 120 days up to the current one, which has no run', async () => {
+      const [first] = await query<{ date: string }>(sql`select min(business_date)::text as date from day_closes`);
+      expect(periods[0]!.startDate <= first!.date).toBe(true);
+      expect(periods[1]!.startDate > first!.date).toBe(true);
+      for (const [i, period] of periods.entries()) {
+        expect(weekday(period.startDate)).toBe(0);
+        expect(weekday(period.endDate)).toBe(6);
+        if (i > 0) expect(dayBefore(period.startDate)).toBe(periods[i - 1]!.endDate);
+      }
+      const current = periods.at(-1)!;
+      for (const branch of await query<{ timeZone: string }>(sql`select time_zone as "timeZone" from branches`)) {
+        const today = businessDateIn(branch.timeZone);
+        expect(current.startDate <= today && today <= current.endDate).toBe(true);
+      }
+      expect(current.runId).toBeNull();
+    });
+
+    it('has every finished period run and approved by the accountant, the older ones exported', async () => {
+      const finished = periods.slice(0, -1);
+      expect(finished.length).toBeGreaterThanOrEqual(8);
+      expect(finished.map((p) => p.runStatus)).toEqual([...finished.slice(0, -2).map(() => 'exported'), 'approved', 'approved']);
+      const approvers = await query<{ role: string }>(sql`select distinct u.role from payroll_runs r join users u on u.id = r.approved_by_id`);
+      expect(approvers).toEqual([{ role: 'accountant' }]);
+      const [staffCount] = await query<{ n: number }>(sql`select count(*)::int as n from staff`);
+      const [lastRun] = await query<{ lines: number }>(sql`select count(*)::int as lines from payroll_lines where run_id = ${finished.at(-1)!.runId}`);
+      expect(lastRun!.lines).toBe(staffCount!.n);
+      // Frozen like any approved run.
+      await t.http().post(`/api/payroll/periods/${finished.at(-1)!.id}/runs`).set('Authorization', await auth('accountant')).expect(409);
+    });
+
+    it('has three plans, every staff member on one, and new terms part-way through', async () => {
+      const plans: { name: string; versions: { effectiveFrom: string }[]; assignments: { staffId: string }[] }[] = (
+        await t.http().get('/api/payroll/plans').set('Authorization', await auth('owner')).expect(200)
+      ).body;
+      expect(plans).toHaveLength(3);
+      const changed = plans.filter((p) => p.versions.length > 1);
+      expect(changed).toHaveLength(1);
+      const from = changed[0]!.versions[1]!.effectiveFrom;
+      expect(periods.some((p) => p.startDate === from) && from > periods[0]!.startDate && from < periods.at(-1)!.startDate).toBe(true);
+      const staff = await query<{ id: string }>(sql`select id from staff`);
+      const assigned = new Set(plans.flatMap((p) => p.assignments.map((a) => a.staffId)));
+      expect(staff.every((s) => assigned.has(s.id))).toBe(true);
+    });
+
+    it('has hours on every day a staff member served a client, 5 to 9 a day, and some weeks over 40', async () => {
+      const [missing] = await query<{ n: number }>(sql`
+        select count(*)::int as n from (select distinct l.staff_id, l.booked_on from ticket_service_lines l join tickets t on t.id = l.ticket_id
+          where t.status = 'closed' and l.refund_of_line_id is null) worked
+        where not exists (select 1 from timesheet_entries e where e.staff_id = worked.staff_id and e.work_date = worked.booked_on)`);
+      expect(missing!.n).toBe(0);
+      const [range] = await query<{ least: string; most: string }>(sql`select min(hours)::text as least, max(hours)::text as most from timesheet_entries`);
+      expect(Number(range!.least)).toBeGreaterThanOrEqual(5);
+      expect(Number(range!.most)).toBeLessThanOrEqual(9);
+      // Workweeks start on Sunday: date_trunc('week') starts on Monday, hence the day's shift.
+      const [long] = await query<{ n: number }>(sql`
+        select count(*)::int as n from (select staff_id, sum(hours) as total from timesheet_entries
+          group by staff_id, date_trunc('week', work_date + 1)) weeks where total > 40`);
+      expect(long!.n).toBeGreaterThan(0);
+    });
+
+    it('computes each approved run from the tickets and hours, with overtime and a minimum-wage top-up among the lines', async () => {
+      const last = periods.at(-2)!;
+      const lines: Line[] = (await t.http().get(`/api/payroll/runs/${last.runId}/lines`).set('Authorization', await auth('accountant')).expect(200)).body;
+      // Independent SQL over the period: service revenue (assistant shares split off) and timesheet hours per staff member.
+      const revenue = await query<{ staffId: string; total: string }>(sql`
+        select staff_id as "staffId", sum(amount)::numeric(12,2)::text as total from (
+          select l.staff_id, l.price * (1 - coalesce(l.assistant_share, 0)) as amount from ticket_service_lines l join tickets t on t.id = l.ticket_id
+            where t.status = 'closed' and l.booked_on between ${last.startDate} and ${last.endDate}
+          union all
+          select l.assistant_staff_id, l.price * l.assistant_share from ticket_service_lines l join tickets t on t.id = l.ticket_id
+            where t.status = 'closed' and l.assistant_staff_id is not null and l.booked_on between ${last.startDate} and ${last.endDate}
+        ) parts group by staff_id`);
+      const hours = await query<{ staffId: string; total: string }>(sql`
+        select staff_id as "staffId", sum(hours)::text as total from timesheet_entries where work_date between ${last.startDate} and ${last.endDate} group by staff_id`);
+      for (const line of lines) {
+        expect([line.staffName, cents(line.serviceRevenue)]).toEqual([line.staffName, cents(revenue.find((r) => r.staffId === line.staffId)?.total ?? '0')]);
+        expect([line.staffName, Number(line.hours)]).toEqual([line.staffName, Number(hours.find((h) => h.staffId === line.staffId)!.total)]);
+      }
+      const all = await query<{ topUps: number; overtime: number }>(sql`
+        select count(*) filter (where minimum_wage_top_up > 0)::int as "topUps", count(*) filter (where overtime_premium > 0)::int as overtime
+        from payroll_lines l join payroll_runs r on r.id = l.run_id where r.status in ('approved', 'exported')`);
+      expect(all[0]!.topUps).toBeGreaterThan(0);
+      expect(all[0]!.overtime).toBeGreaterThan(0);
+      const [run] = await query<{ gross: string; sum: string }>(sql`
+        select r.gross_pay::text as gross, sum(l.gross_pay)::text as sum from payroll_runs r join payroll_lines l on l.run_id = r.id where r.id = ${last.runId} group by r.gross_pay`);
+      expect(run!.gross).toBe(run!.sum);
+    });
+
+    it("shows the demo stylist her own line in an approved run and nobody else's", async () => {
+      const last = periods.at(-2)!;
+      const mine: Line[] = (await t.http().get(`/api/payroll/runs/${last.runId}/lines`).set('Authorization', await auth('stylist')).expect(200)).body;
+      expect(mine.map((l) => l.staffName)).toEqual(['Rhea Castellane']);
+    });
+  });
+
   it('shows the demo stylist only the tickets with her own lines, and 404 for the others', async () => {
     const [rhea] = await query<{ staffId: string }>(sql`select staff_id as "staffId" from users where role = 'stylist'`);
     expect(rhea!.staffId).not.toBeNull();

@@ -1,18 +1,10 @@
 import { Injectable } from '@nestjs/common';
 import type { PayInput } from '@tressury/domain';
 import {
-  adjustments,
-  bowls,
   branches,
-  dayCloses,
   payPlanAssignments,
   payPlanVersions,
-  retailLines,
   staff,
-  ticketServiceLines,
-  tickets,
-  timesheetEntries,
-  tips,
   type BranchRow,
   type PayPeriodRow,
   type PayPlanVersionRow,
@@ -20,8 +12,7 @@ import {
   type StaffRow,
 } from '@tressury/schema';
 import Big from 'big.js';
-import { and, asc, eq, gte, inArray, isNotNull, lte, ne, sql } from 'drizzle-orm';
-import type { PgColumn } from 'drizzle-orm/pg-core';
+import { and, asc, eq, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import { Database } from '../database/database.js';
 
 /** One staff member's computation for a period, ready for computePay. */
@@ -35,6 +26,48 @@ export type StaffPayInput = {
 type Activity = Pick<PayInput, 'serviceLines' | 'retailLines' | 'tips' | 'hours'>;
 
 const plain = (value: string): string => new Big(value).toFixed();
+
+/**
+ * The period's rows, one query per kind. Closed branch-days are matched in forPeriod rather than joined:
+ * without planner statistics (PGlite keeps none) the planner scanned day_closes once per line.
+ */
+function periodQueries(organisationId: string, { startDate, endDate }: PayPeriodRow, staffId: string | undefined) {
+  const inPeriod = (column: SQL) => sql`${column} between ${startDate}::date and ${endDate}::date`;
+  const onlyStaff = (...columns: SQL[]) => (staffId ? sql`and (${sql.join(columns.map((c) => sql`${c} = ${staffId}::uuid`), sql` or `)})` : sql``);
+  const closedTicket = sql`t.organisation_id = ${organisationId}::uuid and t.status = 'closed'`;
+  return {
+    closedDays: sql`
+      select format('%s,%s', branch_id, business_date) as line from day_closes
+      where organisation_id = ${organisationId}::uuid and ${inPeriod(sql`business_date`)}`,
+    // A service line's product cost is the sum of its bowls' costs, to the cent.
+    bowlCosts: sql`
+      select format('%s,%s', b.service_line_id, sum(b.cost)::numeric(12, 2)) as line
+      from bowls b join ticket_service_lines l on l.id = b.service_line_id join tickets t on t.id = l.ticket_id
+      where ${closedTicket} and ${inPeriod(sql`l.booked_on`)} ${onlyStaff(sql`l.staff_id`, sql`l.assistant_staff_id`)}
+      group by b.service_line_id`,
+    serviceLines: sql`
+      select format('%s,%s,%s,%s,%s,%s,%s,%s', l.booked_on, l.id, l.staff_id, l.assistant_staff_id, l.assistant_share, l.price, l.is_colour, t.branch_id) as line
+      from ticket_service_lines l join tickets t on t.id = l.ticket_id
+      where ${closedTicket} and ${inPeriod(sql`l.booked_on`)} ${onlyStaff(sql`l.staff_id`, sql`l.assistant_staff_id`)}`,
+    retailLines: sql`
+      select format('%s,%s,%s,%s,%s', r.booked_on, r.id, r.seller_staff_id, r.amount, t.branch_id) as line
+      from retail_lines r join tickets t on t.id = r.ticket_id
+      where ${closedTicket} and ${inPeriod(sql`r.booked_on`)} ${onlyStaff(sql`r.seller_staff_id`)}`,
+    tips: sql`
+      select format('%s,%s,%s,%s,%s', p.booked_on, p.id, p.staff_id, p.amount, t.branch_id) as line
+      from tips p join tickets t on t.id = p.ticket_id
+      where ${closedTicket} and ${inPeriod(sql`p.booked_on`)} ${onlyStaff(sql`p.staff_id`)}`,
+    adjustments: sql`
+      select format('%s,%s,%s,%s,%s,%s', a.booked_on, a.id, a.staff_id, a.category, a.amount, a.branch_id) as line
+      from adjustments a
+      where a.organisation_id = ${organisationId}::uuid and a.staff_id is not null and a.category <> 'cash'
+        and ${inPeriod(sql`a.booked_on`)} ${onlyStaff(sql`a.staff_id`)}`,
+    hours: sql`
+      select format('%s,%s,%s,%s', h.work_date, h.staff_id, h.branch_id, h.hours) as line
+      from timesheet_entries h
+      where h.organisation_id = ${organisationId}::uuid and ${inPeriod(sql`h.work_date`)} and h.hours > 0 ${onlyStaff(sql`h.staff_id`)}`,
+  };
+}
 
 /**
  * Reads what a pay period's payroll rests on, for every staff member of the organisation with hours or
@@ -54,87 +87,44 @@ export class PayInputsReader {
       if (!found) activity.set(staffId, (found = { serviceLines: [], retailLines: [], tips: [], hours: [] }));
       return found;
     };
-    const { startDate, endDate } = period;
-    const db = this.database.db;
-    const closedDay = (branchColumn: PgColumn, dateColumn: PgColumn) =>
-      and(eq(dayCloses.branchId, branchColumn), eq(dayCloses.businessDate, dateColumn));
-
-    const serviceRows = await db
-      .select({
-        id: ticketServiceLines.id,
-        staffId: ticketServiceLines.staffId,
-        assistantStaffId: ticketServiceLines.assistantStaffId,
-        assistantShare: ticketServiceLines.assistantShare,
-        price: ticketServiceLines.price,
-        isColour: ticketServiceLines.isColour,
-        date: ticketServiceLines.bookedOn,
-        productCost: sql<string>`coalesce((select sum(${bowls.cost}) from ${bowls} where ${bowls.serviceLineId} = ${ticketServiceLines.id}), 0)`,
-      })
-      .from(ticketServiceLines)
-      .innerJoin(tickets, eq(tickets.id, ticketServiceLines.ticketId))
-      .innerJoin(dayCloses, closedDay(tickets.branchId, ticketServiceLines.bookedOn))
-      .where(
-        and(
-          eq(tickets.organisationId, organisationId),
-          eq(tickets.status, 'closed'),
-          gte(ticketServiceLines.bookedOn, startDate),
-          lte(ticketServiceLines.bookedOn, endDate),
-        ),
-      )
-      .orderBy(asc(ticketServiceLines.bookedOn), asc(ticketServiceLines.id));
-    for (const line of serviceRows) {
-      const base = { date: line.date, price: line.price, isColour: line.isColour, productCost: new Big(line.productCost).toFixed(2) };
-      // An assistant's share of a line is theirs; the stylist keeps the rest of the same line.
-      if (line.assistantStaffId && line.assistantShare !== null && new Big(line.assistantShare).gt(0)) {
-        const share = new Big(line.assistantShare);
-        of(line.staffId).serviceLines.push({ id: line.id, ...base, share: new Big(1).minus(share).toFixed() });
-        of(line.assistantStaffId).serviceLines.push({ id: `${line.id}:assistant`, ...base, share: share.toFixed() });
-      } else {
-        of(line.staffId).serviceLines.push({ id: line.id, ...base });
-      }
-    }
-
-    const retailRows = await db
-      .select({ id: retailLines.id, staffId: retailLines.sellerStaffId, date: retailLines.bookedOn, amount: retailLines.amount })
-      .from(retailLines)
-      .innerJoin(tickets, eq(tickets.id, retailLines.ticketId))
-      .innerJoin(dayCloses, closedDay(tickets.branchId, retailLines.bookedOn))
-      .where(and(eq(tickets.organisationId, organisationId), eq(tickets.status, 'closed'), gte(retailLines.bookedOn, startDate), lte(retailLines.bookedOn, endDate)))
-      .orderBy(asc(retailLines.bookedOn), asc(retailLines.id));
-    for (const line of retailRows) of(line.staffId).retailLines.push({ id: line.id, date: line.date, amount: line.amount });
-
-    const tipRows = await db
-      .select({ staffId: tips.staffId, date: tips.bookedOn, amount: tips.amount })
-      .from(tips)
-      .innerJoin(tickets, eq(tickets.id, tips.ticketId))
-      .innerJoin(dayCloses, closedDay(tickets.branchId, tips.bookedOn))
-      .where(and(eq(tickets.organisationId, organisationId), eq(tickets.status, 'closed'), gte(tips.bookedOn, startDate), lte(tips.bookedOn, endDate)))
-      .orderBy(asc(tips.bookedOn), asc(tips.id));
-    for (const tip of tipRows) of(tip.staffId).tips.push({ date: tip.date, amount: tip.amount });
-
-    const adjustmentRows = await db
-      .select({ id: adjustments.id, staffId: adjustments.staffId, category: adjustments.category, date: adjustments.bookedOn, amount: adjustments.amount })
-      .from(adjustments)
-      .innerJoin(dayCloses, closedDay(adjustments.branchId, adjustments.bookedOn))
-      .where(
-        and(
-          eq(adjustments.organisationId, organisationId),
-          isNotNull(adjustments.staffId),
-          ne(adjustments.category, 'cash'),
-          gte(adjustments.bookedOn, startDate),
-          lte(adjustments.bookedOn, endDate),
-        ),
-      )
-      .orderBy(asc(adjustments.bookedOn), asc(adjustments.id));
+    const queries = periodQueries(organisationId, period, options.staffId);
     const chargeCorrections: { staffId: string; amount: string }[] = [];
-    for (const adjustment of adjustmentRows) {
-      const mine = of(adjustment.staffId!);
-      const id = `adjustment:${adjustment.id}`;
-      if (adjustment.category === 'service') mine.serviceLines.push({ id, date: adjustment.date, price: adjustment.amount, isColour: false, productCost: '0.00' });
-      else if (adjustment.category === 'retail') mine.retailLines.push({ id, date: adjustment.date, amount: adjustment.amount });
-      else if (adjustment.category === 'tip') mine.tips.push({ date: adjustment.date, amount: adjustment.amount });
-      else if (adjustment.category === 'product_charge') chargeCorrections.push({ staffId: adjustment.staffId!, amount: adjustment.amount });
-    }
+
+    await this.withHashJoins(!options.staffId, async () => {
+      const closedDays = new Set(Array.from(await this.textRows(queries.closedDays), ([branchId, date]) => `${branchId} ${date}`));
+      const closed = (branchId: string, date: string) => closedDays.has(`${branchId} ${date}`);
+
+      const bowlCost = new Map(Array.from(await this.textRows(queries.bowlCosts), ([lineId, cost]) => [lineId!, cost!]));
+      for (const [date, id, staffId, assistantStaffId, assistantShare, price, isColour, branchId] of await this.textRows(queries.serviceLines, true)) {
+        if (!closed(branchId!, date!)) continue;
+        const productCost = bowlCost.get(id!) ?? '0.00';
+        // An assistant's share of a line is theirs; the stylist keeps the rest of the same line.
+        if (assistantStaffId && assistantShare && new Big(assistantShare).gt(0)) {
+          const share = new Big(assistantShare);
+          of(staffId!).serviceLines.push({ id: id!, date: date!, price: price!, isColour: isColour === 't', productCost, share: new Big(1).minus(share).toFixed() });
+          of(assistantStaffId).serviceLines.push({ id: `${id}:assistant`, date: date!, price: price!, isColour: isColour === 't', productCost, share: share.toFixed() });
+        } else {
+          of(staffId!).serviceLines.push({ id: id!, date: date!, price: price!, isColour: isColour === 't', productCost });
+        }
+      }
+      for (const [date, id, staffId, amount, branchId] of await this.textRows(queries.retailLines, true)) {
+        if (closed(branchId!, date!)) of(staffId!).retailLines.push({ id: id!, date: date!, amount: amount! });
+      }
+      for (const [date, , staffId, amount, branchId] of await this.textRows(queries.tips, true)) {
+        if (closed(branchId!, date!)) of(staffId!).tips.push({ date: date!, amount: amount! });
+      }
+      for (const [date, adjustmentId, staffId, category, amount, branchId] of await this.textRows(queries.adjustments, true)) {
+        if (!closed(branchId!, date!)) continue;
+        const mine = of(staffId!);
+        const id = `adjustment:${adjustmentId}`;
+        if (category === 'service') mine.serviceLines.push({ id, date: date!, price: amount!, isColour: false, productCost: '0.00' });
+        else if (category === 'retail') mine.retailLines.push({ id, date: date!, amount: amount! });
+        else if (category === 'tip') mine.tips.push({ date: date!, amount: amount! });
+        else if (category === 'product_charge') chargeCorrections.push({ staffId: staffId!, amount: amount! });
+      }
+      for (const [date, staffId, , hours] of await this.textRows(queries.hours, true)) of(staffId!).hours.push({ date: date!, hours: plain(hours!) });
+    });
+
     // A product-charge correction has no price of its own and computePay caps a line's charge at its price,
     // so it is added to the product cost of the staff member's highest-priced line in the period.
     for (const correction of chargeCorrections) {
@@ -145,24 +135,17 @@ export class PayInputsReader {
       target.productCost = (cost.lt(0) ? new Big(0) : cost).toFixed(2);
     }
 
-    const hourRows = await db
-      .select({ staffId: timesheetEntries.staffId, date: timesheetEntries.workDate, hours: timesheetEntries.hours })
-      .from(timesheetEntries)
-      .where(and(eq(timesheetEntries.organisationId, organisationId), gte(timesheetEntries.workDate, startDate), lte(timesheetEntries.workDate, endDate)))
-      .orderBy(asc(timesheetEntries.workDate), asc(timesheetEntries.staffId), asc(timesheetEntries.branchId));
-    for (const entry of hourRows) if (new Big(entry.hours).gt(0)) of(entry.staffId).hours.push({ date: entry.date, hours: plain(entry.hours) });
-
     if (options.staffId) for (const id of [...activity.keys()]) if (id !== options.staffId) activity.delete(id);
     if (activity.size === 0) return [];
     const staffIds = [...activity.keys()];
-    const staffRows = await db.select().from(staff).where(inArray(staff.id, staffIds));
-    const branchRows = await db.select().from(branches).where(eq(branches.organisationId, organisationId));
-    const versions = await this.planVersionsOn(organisationId, startDate);
+    const staffRows = await this.database.db.select().from(staff).where(inArray(staff.id, staffIds));
+    const branchOf = new Map((await this.database.db.select().from(branches).where(eq(branches.organisationId, organisationId))).map((b) => [b.id, b]));
+    const versions = await this.planVersionsOn(organisationId, period.startDate);
 
     return staffRows
       .sort((a, b) => a.displayName.localeCompare(b.displayName) || a.id.localeCompare(b.id))
       .map((member) => {
-        const branch = branchRows.find((b) => b.id === member.homeBranchId)!;
+        const branch = branchOf.get(member.homeBranchId)!;
         const version = versions.get(member.id) ?? null;
         const hourlyRate = member.hourlyRate ?? version?.hourlyRate ?? null;
         const input: PayInput = {
@@ -190,6 +173,36 @@ export class PayInputsReader {
         };
         return { staff: member, branch, planVersion: version, input };
       });
+  }
+
+  /**
+   * Runs a whole organisation's reads with hash joins only. PGlite keeps no planner statistics, and
+   * without them the planner probed the tickets once per line; one staff member's few rows are left to the
+   * planner, which finds them through the staff indexes.
+   */
+  private async withHashJoins(bulk: boolean, work: () => Promise<void>): Promise<void> {
+    if (!bulk) return work();
+    await this.database.transaction(async () => {
+      await this.database.db.execute(sql`set local enable_nestloop = off`);
+      await this.database.db.execute(sql`set local enable_mergejoin = off`);
+      await work();
+    });
+  }
+
+  /**
+   * The rows of a query that selects one `line` of comma-separated fields (ids, numbers, dates and flags
+   * only; '' for null), split into fields. PGlite decodes every column of every row in JavaScript, so one
+   * text column costs half as much as the columns themselves. `sorted` orders the lines as text, which is
+   * their order by leading fields when those are ISO dates and uuids, sparing the database a sort on disk.
+   */
+  private async textRows(query: SQL, sorted = false): Promise<Iterable<string[]>> {
+    const result: unknown = await this.database.db.execute(query);
+    const lines = ((Array.isArray(result) ? result : (result as { rows: unknown[] }).rows) as { line: string }[]).map((row) => row.line);
+    if (sorted) lines.sort();
+    // Split one line at a time: the fields are gone before the next, which keeps the garbage collector's work small.
+    return (function* () {
+      for (const line of lines) yield line.split(',');
+    })();
   }
 
   /** Per staff member, the version of their plan in effect on `date` (the latest assignment and version on or before it). */

@@ -3,6 +3,8 @@ import {
   payPlanAssignments,
   payPlans,
   payPlanVersions,
+  payPeriods,
+  payrollRuns,
   paySchedules,
   staff,
   type PayPlanAssignmentRow,
@@ -11,7 +13,7 @@ import {
   type PayScheduleRow,
   type StaffRow,
 } from '@tressury/schema';
-import { and, asc, eq, inArray, type SQL } from 'drizzle-orm';
+import { and, asc, eq, inArray, max, type SQL } from 'drizzle-orm';
 import { Database } from '../database/database.js';
 
 @Injectable()
@@ -87,5 +89,15 @@ export class PayPlansRepository {
   async schedule(organisationId: string): Promise<PayScheduleRow | null> {
     const [row] = await this.database.db.select().from(paySchedules).where(eq(paySchedules.organisationId, organisationId));
     return row ?? null;
+  }
+
+  /** The last day of the latest pay period whose run is approved or exported: terms on or before it would misstate what was paid. */
+  async frozenThrough(organisationId: string): Promise<string | null> {
+    const [row] = await this.database.db
+      .select({ end: max(payPeriods.endDate) })
+      .from(payrollRuns)
+      .innerJoin(payPeriods, eq(payPeriods.id, payrollRuns.periodId))
+      .where(and(eq(payPeriods.organisationId, organisationId), inArray(payrollRuns.status, ['approved', 'exported'])));
+    return row?.end ?? null;
   }
 }

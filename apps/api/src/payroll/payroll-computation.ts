@@ -13,6 +13,8 @@ import { PayrollRunsRepository } from './payroll-runs.repository.js';
 // Staff per transaction: short transactions let other requests through on PGlite, which holds the
 // whole database while one is open, and each one moves the progress counter.
 const CHUNK = 100;
+// Far inside STALLED_AFTER_MS: a run whose heartbeat is a minute old is taken for dead and may be replaced.
+const HEARTBEAT_MS = 10_000;
 
 /**
  * Works a payroll run through its staff after the request that started it has been answered: reads the
@@ -43,6 +45,8 @@ export class PayrollComputation implements BeforeApplicationShutdown {
 
   /** Computes the run to the end; a problem marks it failed with a reason a person can act on. */
   async compute(organisationId: string, runId: string): Promise<void> {
+    // On a timer as well as per chunk: reading a large period's inputs comes before the first chunk.
+    const heartbeat = setInterval(() => void this.runs.updateRun(runId, { heartbeatAt: new Date() }).catch(() => undefined), HEARTBEAT_MS);
     try {
       await nextTick();
       const found = await this.runs.findRun(organisationId, runId);
@@ -65,7 +69,7 @@ export class PayrollComputation implements BeforeApplicationShutdown {
         for (const line of lines) grossPay = grossPay.plus(line.grossPay);
         await this.database.transaction(async () => {
           await this.runs.insertLines(lines);
-          await this.runs.updateRun(runId, { processedStaff: i + chunk.length });
+          await this.runs.updateRun(runId, { processedStaff: i + chunk.length, heartbeatAt: new Date() });
         });
         await nextTick();
       }
@@ -77,6 +81,8 @@ export class PayrollComputation implements BeforeApplicationShutdown {
       const reason = error instanceof DomainError ? error.message : 'The run stopped on an unexpected error; it has been logged. Run the period again.';
       if (!(error instanceof DomainError)) this.logger.error(`Payroll run ${runId} failed`, error instanceof Error ? error.stack : String(error));
       await this.runs.updateRun(runId, { status: 'failed', error: reason, completedAt: new Date() }).catch(() => undefined);
+    } finally {
+      clearInterval(heartbeat);
     }
   }
 }

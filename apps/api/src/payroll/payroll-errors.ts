@@ -5,6 +5,13 @@ export const payPlanNameTaken = (name: string) =>
   new DomainError('pay_plan.name_taken', `A pay plan called "${name}" already exists.`, 'conflict', 'name');
 export const payPlanVersionExists = (date: string) =>
   new DomainError('pay_plan.version_exists', `The plan already has terms starting on ${date}.`, 'conflict', 'effectiveFrom');
+export const termsBeforeFrozen = (date: string, frozenThrough: string) =>
+  new DomainError(
+    'pay_plan.period_frozen',
+    `Payroll is approved through ${frozenThrough}; plan changes can start from the next pay period, not ${date}.`,
+    'conflict',
+    'effectiveFrom',
+  );
 export const staffNotFound = (field = 'staffId') => new DomainError('staff.not_found', 'No such staff member.', 'not_found', field);
 export const branchNotFound = (field = 'branchId') => new DomainError('branch.not_found', 'No such branch.', 'not_found', field);
 export const assignmentExists = (date: string) =>

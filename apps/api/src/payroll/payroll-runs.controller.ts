@@ -8,8 +8,11 @@ import { CheckPolicies } from '../authz/check-policies.decorator.js';
 import { ParseId } from '../common/parse-id.pipe.js';
 import { ApprovePayrollRunCommand } from './commands/approve-payroll-run.command.js';
 import { type ExportedFile, ExportPayrollRunCommand } from './commands/export-payroll-run.command.js';
+import { SendPayStatementsCommand } from './commands/send-pay-statements.command.js';
 import { StartPayrollRunCommand } from './commands/start-payroll-run.command.js';
 import { PayrollLineDetailView, PayrollLineView, PayrollRunView } from './dto/payroll-run.view.js';
+import { SentStatementsView } from './dto/sent-statements.view.js';
+import { GetPayStatementQuery } from './queries/get-pay-statement.query.js';
 import { GetPayrollLineQuery } from './queries/get-payroll-line.query.js';
 import { GetPayrollRunQuery } from './queries/get-payroll-run.query.js';
 import { ListPayrollLinesQuery } from './queries/list-payroll-lines.query.js';
@@ -78,9 +81,37 @@ export class PayrollRunsController {
   async summaryCsv(@CurrentUser() user: AuthUser, @Param('id', ParseId()) id: string, @Res({ passthrough: true }) response: Response): Promise<StreamableFile> {
     return send(response, await this.commands.execute(new ExportPayrollRunCommand(user, id, 'csv')));
   }
+
+  /**
+   * E-mails each staff member of an approved run their statement (figures in the body, workbook attached);
+   * each message is recorded in the outbox, sent or failed with the reason. Sending again is allowed.
+   */
+  @Post('runs/:id/statements')
+  @HttpCode(200)
+  @CheckPolicies('update', 'PayrollRun')
+  sendStatements(@CurrentUser() user: AuthUser, @Param('id', ParseId()) id: string): Promise<SentStatementsView> {
+    return this.commands.execute(new SendPayStatementsCommand(user, id));
+  }
+
+  /** One staff member's statement workbook: whoever may read the line (a stylist only her own). */
+  @Get('runs/:id/lines/:lineId/statement.xlsx')
+  @CheckPolicies('read', 'PayrollLine')
+  @ApiProduces('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet')
+  async statement(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseId()) id: string,
+    @Param('lineId', ParseId('lineId')) lineId: string,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<StreamableFile> {
+    return send(response, await this.queries.execute(new GetPayStatementQuery(user, id, lineId)));
+  }
 }
 
 function send(response: Response, file: ExportedFile): StreamableFile {
   response.setHeader('Content-Disposition', `attachment; filename="${file.fileName}"; filename*=UTF-8''${encodeURIComponent(file.fileName)}`);
-  return new StreamableFile(file.body, { type: file.contentType, length: file.body.length });
+  if (!('length' in file)) return new StreamableFile(file.body, { type: file.contentType, length: file.body.length });
+  // A client that goes away mid-download leaves the stream paused: close it so its file is released.
+  const { body } = file;
+  response.once('close', () => body.destroy());
+  return new StreamableFile(body, { type: file.contentType, length: file.length });
 }

@@ -1,7 +1,6 @@
-import { computePay, DomainError, type PayInput } from '@tressury/domain';
+import { computePay, DomainError, isPeriodStart, type PayCalendar, type PayInput } from '@tressury/domain';
 import type { payPlanVersions } from '@tressury/schema';
 import type { PayPlanTermsDto } from './dto/pay-plan-terms.dto.js';
-import { isPeriodStart, type PayCalendar } from './pay-periods.js';
 import { notPeriodStart } from './payroll-errors.js';
 
 /**

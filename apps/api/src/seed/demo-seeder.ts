@@ -7,10 +7,14 @@ import {
   branches,
   clients,
   dayCloses,
-  domainEvents,
   levels,
   organisations,
   payments,
+  payPeriods,
+  payPlanAssignments,
+  payPlans,
+  payPlanVersions,
+  paySchedules,
   products,
   retailLines,
   servicePrices,
@@ -18,6 +22,7 @@ import {
   staff,
   ticketServiceLines,
   tickets,
+  timesheetEntries,
   tips,
   userBranches,
   users,
@@ -28,17 +33,22 @@ import { performance } from 'node:perf_hooks';
 import { hashPassword } from '../auth/passwords.js';
 import type { AppConfig } from '../config.js';
 import { Database } from '../database/database.js';
+import { DemoBusinessLoaded } from '../events/demo-business-loaded.js';
+import { EventLog } from '../events/event-log.js';
 import { demoEndDates } from './demo-dates.js';
 
-export type SeedMode = 'basic' | 'full';
+export type SeedMode = 'basic' | 'tickets' | 'full';
 
 // One JSON parameter per chunk: 1000 rows keep each statement around a megabyte.
 const CHUNK = 1000;
+const PAYROLL_TABLES = ['paySchedule', 'payPeriods', 'payPlans', 'payPlanVersions', 'payPlanAssignments', 'timesheetEntries'];
 
 /**
  * Loads the invented demo business into an empty database; a database with any organisation is left
  * alone. `full` is the whole business with its last 120 days of tickets, every day up to yesterday
- * closed; `basic` only the organisation, branches and sign-ins (the API tests build their own floor).
+ * closed, and its payroll: schedule, plans, hours, and the finished periods run and approved; `tickets`
+ * the same without the payroll (for tests that set pay up themselves); `basic` only the organisation,
+ * branches and sign-ins (the API tests build their own floor).
  */
 @Injectable()
 export class DemoSeeder implements OnApplicationBootstrap {
@@ -47,6 +57,7 @@ export class DemoSeeder implements OnApplicationBootstrap {
   constructor(
     private readonly database: Database,
     private readonly config: ConfigService<AppConfig, true>,
+    private readonly events: EventLog,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
@@ -58,12 +69,13 @@ export class DemoSeeder implements OnApplicationBootstrap {
     if (!(await this.isEmpty())) return false;
     const passwordHash = await hashPassword(DEMO_PASSWORD);
     const started = performance.now();
-    const full = mode === 'full' ? generateDemoBusiness(demoEndDates()) : null;
+    const full = mode === 'basic' ? null : generateDemoBusiness(demoEndDates());
+    const withPayroll = mode === 'full' ? full : null;
     const foundation = full ?? generateDemoFoundation({ createdAt: new Date() });
     const generated = performance.now();
     const organisationId = foundation.organisation.id;
     const seeded = await this.database.transaction(async () => {
-      if (!(await this.isEmpty())) return false;
+      if (!(await this.isEmpty())) return null;
       await this.insert(organisations, [foundation.organisation]);
       await this.insert(branches, foundation.branches);
       if (full) {
@@ -89,20 +101,36 @@ export class DemoSeeder implements OnApplicationBootstrap {
         await this.insert(payments, full.payments);
         await this.insert(dayCloses, full.dayCloses);
       }
-      const counts = full?.counts ?? { branches: foundation.branches.length, users: foundation.users.length };
-      await this.insert(domainEvents, [
-        { organisationId, type: 'DemoBusinessLoaded', aggregateType: 'Organisation', aggregateId: organisationId, actorId: null, payload: { mode, ...counts } },
-      ]);
-      return true;
+      if (withPayroll) {
+        await this.insert(paySchedules, [withPayroll.paySchedule]);
+        await this.insert(payPeriods, withPayroll.payPeriods);
+        await this.insert(payPlans, withPayroll.payPlans);
+        await this.insert(payPlanVersions, withPayroll.payPlanVersions);
+        await this.insert(payPlanAssignments, withPayroll.payPlanAssignments);
+        await this.insert(timesheetEntries, withPayroll.timesheetEntries);
+      }
+      const counts = full
+        ? Object.fromEntries(Object.entries(full.counts).filter(([table]) => withPayroll || !PAYROLL_TABLES.includes(table)))
+        : { branches: foundation.branches.length, users: foundation.users.length };
+      const event = new DemoBusinessLoaded(organisationId, organisationId, null, { mode, ...counts, ...(withPayroll ? { payroll: withPayroll.payroll } : {}) });
+      await this.events.append(event);
+      return event;
     });
     if (!seeded) return false;
+    // Planner statistics for the bulk-loaded tables: without them (PGlite has no autovacuum) the first
+    // queries over tens of thousands of rows take nested loops that run for seconds.
+    await this.database.db.execute(sql`analyze`);
     const loaded = performance.now();
+    // The payroll feature runs and approves the finished pay periods from the event.
+    await seeded.settled().catch((error: unknown) => this.logger.error('The demo payroll history could not be completed', error instanceof Error ? error.stack : String(error)));
+    const completed = performance.now();
     const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
     const content = full
-      ? `${full.counts.tickets} tickets and ${full.counts.dayCloses} closed days in ${full.counts.branches} branches`
+      ? `${full.counts.tickets} tickets and ${full.counts.dayCloses} closed days in ${full.counts.branches} branches` + (withPayroll ? `, ${withPayroll.counts.payPeriods} pay periods` : '')
       : `${foundation.branches.length} branches and ${foundation.users.length} sign-ins`;
     this.logger.log(
-      `Loaded the demo business "${demoBusiness.organisationName}" (${mode}): ${content}; generated in ${seconds(generated - started)}, loaded in ${seconds(loaded - generated)}`,
+      `Loaded the demo business "${demoBusiness.organisationName}" (${mode}): ${content}; generated in ${seconds(generated - started)}, loaded in ${seconds(loaded - generated)}` +
+        (withPayroll ? `, past payroll runs in ${seconds(completed - loaded)}` : ''),
     );
     return true;
   }

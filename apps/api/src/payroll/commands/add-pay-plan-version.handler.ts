@@ -6,7 +6,7 @@ import { EventLog } from '../../events/event-log.js';
 import { type PayPlanView, toPayPlanVersionView, toPayPlanView } from '../dto/pay-plan.view.js';
 import { PayPlanVersionAdded } from '../events/pay-plan-version-added.js';
 import { PayPlansRepository } from '../pay-plans.repository.js';
-import { payPlanNotFound, payPlanVersionExists, scheduleMissing } from '../payroll-errors.js';
+import { payPlanNotFound, payPlanVersionExists, scheduleMissing, termsBeforeFrozen } from '../payroll-errors.js';
 import { checkPlanTerms, versionValues } from '../plan-terms.js';
 import { AddPayPlanVersionCommand } from './add-pay-plan-version.command.js';
 
@@ -29,6 +29,8 @@ export class AddPayPlanVersionHandler implements ICommandHandler<AddPayPlanVersi
       const schedule = await this.plans.schedule(user.organisationId);
       if (!schedule) throw scheduleMissing();
       checkPlanTerms(terms, schedule);
+      const frozenThrough = await this.plans.frozenThrough(user.organisationId);
+      if (frozenThrough && terms.effectiveFrom <= frozenThrough) throw termsBeforeFrozen(terms.effectiveFrom, frozenThrough);
       const versions = await this.plans.versionsOf([plan.id]);
       if (versions.some((v) => v.effectiveFrom === terms.effectiveFrom)) throw payPlanVersionExists(terms.effectiveFrom);
       const version = await this.plans.insertVersion(versionValues(plan.id, terms, user.id));

@@ -1,13 +1,13 @@
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
+import { isPeriodStart } from '@tressury/domain';
 import { AbilityFactory } from '../../authz/ability.factory.js';
 import { assertCan } from '../../authz/refusal.js';
 import { Database } from '../../database/database.js';
 import { EventLog } from '../../events/event-log.js';
 import { type PayPlanView, toPayPlanView } from '../dto/pay-plan.view.js';
 import { PayPlanAssigned } from '../events/pay-plan-assigned.js';
-import { isPeriodStart } from '../pay-periods.js';
 import { PayPlansRepository } from '../pay-plans.repository.js';
-import { assignmentExists, notPeriodStart, payPlanNotFound, scheduleMissing, staffNotFound } from '../payroll-errors.js';
+import { assignmentExists, notPeriodStart, payPlanNotFound, scheduleMissing, staffNotFound, termsBeforeFrozen } from '../payroll-errors.js';
 import { AssignPayPlanCommand } from './assign-pay-plan.command.js';
 
 @CommandHandler(AssignPayPlanCommand)
@@ -30,6 +30,8 @@ export class AssignPayPlanHandler implements ICommandHandler<AssignPayPlanComman
       const schedule = await this.plans.schedule(user.organisationId);
       if (!schedule) throw scheduleMissing();
       if (!isPeriodStart(schedule, input.effectiveFrom)) throw notPeriodStart(input.effectiveFrom, 'effectiveFrom');
+      const frozenThrough = await this.plans.frozenThrough(user.organisationId);
+      if (frozenThrough && input.effectiveFrom <= frozenThrough) throw termsBeforeFrozen(input.effectiveFrom, frozenThrough);
       if (await this.plans.assignmentOn(member.id, input.effectiveFrom)) throw assignmentExists(input.effectiveFrom);
       await this.plans.insertAssignment({ organisationId: user.organisationId, staffId: member.id, planId: plan.id, effectiveFrom: input.effectiveFrom, createdById: user.id });
       await this.events.append(new PayPlanAssigned(user.organisationId, plan.id, user.id, { staffId: member.id, effectiveFrom: input.effectiveFrom }));

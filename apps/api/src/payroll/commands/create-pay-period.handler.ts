@@ -1,4 +1,5 @@
 import { CommandHandler, type ICommandHandler } from '@nestjs/cqrs';
+import { payPeriodAfter, payPeriodContaining } from '@tressury/domain';
 import { AbilityFactory } from '../../authz/ability.factory.js';
 import { assertCan } from '../../authz/refusal.js';
 import { Database } from '../../database/database.js';
@@ -6,7 +7,6 @@ import { EventLog } from '../../events/event-log.js';
 import { type PayPeriodView, toPayPeriodView } from '../dto/pay-schedule.view.js';
 import { PayPeriodCreated } from '../events/pay-period-created.js';
 import { PayCalendarRepository } from '../pay-calendar.repository.js';
-import { payPeriodAfter, payPeriodContaining } from '../pay-periods.js';
 import { payPeriodExists, payPeriodNotFound, scheduleMissing } from '../payroll-errors.js';
 import { CreatePayPeriodCommand } from './create-pay-period.command.js';
 

@@ -1,7 +1,9 @@
 import { Command } from '@nestjs/cqrs';
+import type { Readable } from 'node:stream';
 import type { AuthUser } from '../../auth/auth-user.js';
 
-export type ExportedFile = { fileName: string; contentType: string; body: Buffer };
+/** A file to send: small ones in memory, large ones as a stream of known length. */
+export type ExportedFile = { fileName: string; contentType: string } & ({ body: Buffer } | { body: Readable; length: number });
 
 export class ExportPayrollRunCommand extends Command<ExportedFile> {
   constructor(

@@ -15,11 +15,19 @@ export class PayrollRunView {
   processedStaff: number;
   /** Why the run failed, when it did. */
   error: string | null;
+  /** Computing, but the instance working on it has not renewed its heartbeat for a minute: starting the period again replaces it. */
+  stalled: boolean;
   startedAt: string;
   completedAt: string | null;
   approvedAt: string | null;
   exportedAt: string | null;
 }
+
+/** How long a computing run may go without a heartbeat before it counts as stalled; the computing instance renews it far more often. */
+export const STALLED_AFTER_MS = 60_000;
+
+export const isStalled = (run: PayrollRunRow, now: Date = new Date()): boolean =>
+  run.status === 'computing' && now.getTime() - (run.heartbeatAt ?? run.startedAt).getTime() > STALLED_AFTER_MS;
 
 export const toPayrollRunView = (run: PayrollRunRow, period: PayPeriodRow): PayrollRunView => ({
   id: run.id,
@@ -30,6 +38,7 @@ export const toPayrollRunView = (run: PayrollRunRow, period: PayPeriodRow): Payr
   totalStaff: run.totalStaff,
   processedStaff: run.processedStaff,
   error: run.error,
+  stalled: isStalled(run),
   startedAt: run.startedAt.toISOString(),
   completedAt: run.completedAt?.toISOString() ?? null,
   approvedAt: run.approvedAt?.toISOString() ?? null,

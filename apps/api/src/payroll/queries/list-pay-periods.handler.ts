@@ -1,7 +1,7 @@
 import { type IQueryHandler, QueryHandler } from '@nestjs/cqrs';
+import { payPeriodAfter, payPeriodContaining } from '@tressury/domain';
 import { type PayPeriodsView, toPayPeriodView, toPayScheduleView } from '../dto/pay-schedule.view.js';
 import { PayCalendarRepository } from '../pay-calendar.repository.js';
-import { payPeriodAfter, payPeriodContaining } from '../pay-periods.js';
 import { ListPayPeriodsQuery } from './list-pay-periods.query.js';
 
 const LISTED = 26;
