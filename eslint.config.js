@@ -8,8 +8,8 @@ const webBoundaries = [
   { regex: '(^|/)(apps/api|drizzle)/', message: 'The web app never imports the API or the database schema.' },
 ];
 
-// card-processor is infrastructure (like database and events): any feature may call it.
-const featureFolders = ['auth', 'authz', 'branches', 'organisation', 'health', 'seed', 'catalogue', 'staff', 'clients', 'tickets', 'day-close', 'payroll'];
+// card-processor and mail are infrastructure (like database and events): any feature may call them.
+const featureFolders = ['auth', 'authz', 'branches', 'organisation', 'health', 'seed', 'catalogue', 'staff', 'clients', 'tickets', 'day-close', 'payroll', 'compare'];
 
 export default tseslint.config(
   { ignores: ['**/dist/**', '**/node_modules/**', 'apps/web/src/lib/api-schema.d.ts', 'drizzle/migrations/**', 'tests/output/**', 'data/**'] },
@@ -74,4 +74,18 @@ export default tseslint.config(
       ],
     },
   })),
+  {
+    // Infrastructure serves every feature and depends on none of them.
+    files: ['apps/api/src/card-processor/**/*.ts', 'apps/api/src/mail/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: featureFolders
+            .filter((feature) => feature !== 'auth' && feature !== 'authz')
+            .map((feature) => ({ regex: `^\\.\\./(\\.\\./)?${feature}/`, message: 'Infrastructure does not import features.' })),
+        },
+      ],
+    },
+  },
 );

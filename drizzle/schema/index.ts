@@ -10,3 +10,4 @@ export * from './tickets.js';
 export * from './day-close.js';
 export * from './payroll.js';
 export * from './mail.js';
+export * from './compare.js';

@@ -1,9 +1,8 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot } from '../support/browser.js';
+import { launchChromium, screenshot, signInPage } from '../support/browser.js';
 import { type RunningApp, startBuiltApp } from '../support/running-app.js';
 
-const DEMO_PASSWORD = 'tressury-demo';
 
 describe('foundation in a real browser', () => {
   let app: RunningApp;
@@ -18,15 +17,7 @@ describe('foundation in a real browser', () => {
     await app?.stop();
   });
 
-  async function signIn(email: string): Promise<Page> {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
-    await page.goto(app.baseUrl);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('navigation', { name: 'Main' }).waitFor();
-    return page;
-  }
+  const signIn = (email: string): Promise<Page> => signInPage(browser, app.baseUrl, email, { viewport: { width: 1280, height: 800 } });
 
   it('shows the sign-in page and refuses a wrong password with a message', async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });

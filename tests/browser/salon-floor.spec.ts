@@ -1,9 +1,8 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot } from '../support/browser.js';
+import { launchChromium, screenshot, signInPage } from '../support/browser.js';
 import { type RunningApp, startBuiltApp } from '../support/running-app.js';
 
-const DEMO_PASSWORD = 'tressury-demo';
 // The demo business's Riverside branch and its senior stylist, who signs in as stylist@.
 const BRANCH = 'Riverside';
 const STYLIST = 'Rhea Castellane';
@@ -27,15 +26,7 @@ describe('the salon floor in a real browser', () => {
     await app?.stop();
   });
 
-  async function signIn(who: string): Promise<Page> {
-    const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
-    await page.goto(app.baseUrl);
-    await page.getByLabel('E-mail').fill(`${who}@thistlewick.example`);
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('navigation', { name: 'Main' }).waitFor();
-    return page;
-  }
+  const signIn = (who: string): Promise<Page> => signInPage(browser, app.baseUrl, who, { viewport: { width: 1366, height: 900 } });
 
   /** The figure beside a label in the bowl editor's "As mixed" list. */
   const bowlFigure = (page: Page, label: string) =>

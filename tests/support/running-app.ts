@@ -21,7 +21,9 @@ export async function startBuiltApp(port: number, env: Record<string, string> = 
   child.stdout?.on('data', (chunk: Buffer) => (output += chunk.toString()));
   child.stderr?.on('data', (chunk: Buffer) => (output += chunk.toString()));
   const baseUrl = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 60_000;
+  // The full demo loads and builds its read models before listening: allow for a busy machine.
+  const startSeconds = 180;
+  const deadline = Date.now() + startSeconds * 1000;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`the app exited early:\n${output}`);
     try {
@@ -29,7 +31,12 @@ export async function startBuiltApp(port: number, env: Record<string, string> = 
     } catch {
       // not listening yet
     }
-    if (Date.now() > deadline) throw new Error(`the app did not start within 60 s:\n${output}`);
+    if (Date.now() > deadline) {
+      // Stop it here: the caller never gets a handle to stop it with.
+      child.once('exit', () => rmSync(dataRoot, { recursive: true, force: true }));
+      child.kill('SIGTERM');
+      throw new Error(`the app did not start within ${startSeconds} s:\n${output}`);
+    }
     await new Promise((r) => setTimeout(r, 250));
   }
   return {

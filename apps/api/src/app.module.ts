@@ -10,7 +10,9 @@ import { BranchesModule } from './branches/branches.module.js';
 import { CardProcessorModule } from './card-processor/card-processor.module.js';
 import { CatalogueModule } from './catalogue/catalogue.module.js';
 import { ClientsModule } from './clients/clients.module.js';
+import { CompareModule } from './compare/compare.module.js';
 import { DayCloseModule } from './day-close/day-close.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { PayrollModule } from './payroll/payroll.module.js';
 import { StaffModule } from './staff/staff.module.js';
 import { TicketsModule } from './tickets/tickets.module.js';
@@ -34,10 +36,13 @@ const features = [
   StaffModule,
   ClientsModule,
   CardProcessorModule,
+  MailModule,
   TicketsModule,
   DayCloseModule,
   PayrollModule,
   SeedModule,
+  // After SeedModule: its start-up build of the comparison's read models sees what the seed loaded.
+  CompareModule,
 ];
 
 /** The whole API; `register` reads the environment it is given once, so each test app gets its own settings. */

@@ -13,13 +13,18 @@ export type AppConfig = {
   cookieSecure: boolean;
   loginThrottleLimit: number;
   loginThrottleWindowMs: number;
-  /** What an empty database gets at start: the whole demo business, its organisation, branches and sign-ins only, or nothing. */
-  seedDemo: 'full' | 'basic' | false;
+  /** What an empty database gets at start: the whole demo business, the same without its payroll, its organisation, branches and sign-ins only, or nothing. */
+  seedDemo: 'full' | 'tickets' | 'basic' | false;
   webDist: string | null;
   checkpointMinutes: number;
   /** Card payments: the stripe SDK against the local fake unless a real secret key is set. */
   cardProcessor: { mode: 'fake' | 'live'; secretKey: string; webhookSecret: string; fakePort: number };
+  /** Outgoing mail: the local SMTP fake started with the app, or a real SMTP server when SMTP_HOST is set. */
+  mail: MailSettings;
 };
+
+export type SmtpServerSettings = { host: string; port: number; secure: boolean; user: string | null; password: string | null };
+export type MailSettings = { from: string } & ({ mode: 'fake'; fakePort: number } | { mode: 'smtp'; server: SmtpServerSettings });
 
 export class ConfigError extends Error {}
 
@@ -38,6 +43,29 @@ function flag(env: NodeJS.ProcessEnv, name: string, fallback: boolean): boolean 
   if (raw === 'true' || raw === '1') return true;
   if (raw === 'false' || raw === '0') return false;
   throw new ConfigError(`${name} must be true or false, got "${raw}"`);
+}
+
+// A bare address or `Name <address>`; the real server has the last word on what it accepts.
+const MAIL_FROM = /^(?:[^<>@\r\n]*<[^<>@\s]+@[^<>@\s]+\.[^<>@\s]+>|[^<>@\s]+@[^<>@\s]+\.[^<>@\s]+)$/;
+const SMTP_DETAILS = ['SMTP_PORT', 'SMTP_USER', 'SMTP_PASSWORD', 'SMTP_SECURE'] as const;
+
+function mailSettings(env: NodeJS.ProcessEnv): MailSettings {
+  const from = env.MAIL_FROM?.trim() || null;
+  if (from && !MAIL_FROM.test(from)) throw new ConfigError(`MAIL_FROM must be an address such as "Payroll <payroll@example.com>", got "${from}"`);
+  const host = env.SMTP_HOST?.trim() || null;
+  if (!host) {
+    const stray = SMTP_DETAILS.find((name) => env[name]?.trim());
+    if (stray) throw new ConfigError(`${stray} is set but SMTP_HOST is not: set SMTP_HOST to send through a real mail server`);
+    return { mode: 'fake', from: from ?? 'Tressury <no-reply@tressury.example>', fakePort: integer(env, 'SMTP_FAKE_PORT', 0, 0, 65535) };
+  }
+  if (/[\s/:]/.test(host)) throw new ConfigError(`SMTP_HOST must be a host name or IP address without scheme or port, got "${host}"`);
+  if (!from) throw new ConfigError('MAIL_FROM is required with SMTP_HOST: the sender address the mail server accepts from Tressury');
+  const secure = flag(env, 'SMTP_SECURE', env.SMTP_PORT?.trim() === '465');
+  const user = env.SMTP_USER?.trim() || null;
+  const password = env.SMTP_PASSWORD || null;
+  if (user && !password) throw new ConfigError('SMTP_PASSWORD is required with SMTP_USER');
+  if (password && !user) throw new ConfigError('SMTP_USER is required with SMTP_PASSWORD');
+  return { mode: 'smtp', from, server: { host, port: integer(env, 'SMTP_PORT', secure ? 465 : 587, 1, 65535), secure, user, password } };
 }
 
 /** Reads and checks the environment once at boot; a bad value stops the app with the variable named. */
@@ -68,7 +96,12 @@ export function parseConfig(env: NodeJS.ProcessEnv): AppConfig {
     cookieSecure: flag(env, 'COOKIE_SECURE', false),
     loginThrottleLimit: integer(env, 'LOGIN_THROTTLE_LIMIT', 10, 1, 100000),
     loginThrottleWindowMs: integer(env, 'LOGIN_THROTTLE_WINDOW_MS', 60000, 1000, 3600000),
-    seedDemo: env.TRESSURY_SEED_DEMO === 'basic' ? 'basic' : env.TRESSURY_SEED_DEMO === 'full' || flag(env, 'TRESSURY_SEED_DEMO', true) ? 'full' : false,
+    seedDemo:
+      env.TRESSURY_SEED_DEMO === 'basic' || env.TRESSURY_SEED_DEMO === 'tickets'
+        ? env.TRESSURY_SEED_DEMO
+        : env.TRESSURY_SEED_DEMO === 'full' || flag(env, 'TRESSURY_SEED_DEMO', true)
+          ? 'full'
+          : false,
     webDist: env.TRESSURY_WEB_DIST === '' ? null : (env.TRESSURY_WEB_DIST ?? null),
     checkpointMinutes: integer(env, 'CHECKPOINT_MINUTES', 5, 1, 1440),
     cardProcessor: stripeKey
@@ -79,6 +112,7 @@ export function parseConfig(env: NodeJS.ProcessEnv): AppConfig {
           webhookSecret: `whsec_fake_${randomBytes(24).toString('hex')}`,
           fakePort: integer(env, 'CARD_PROCESSOR_FAKE_PORT', 0, 0, 65535),
         },
+    mail: mailSettings(env),
   };
 }
 

@@ -5,7 +5,9 @@ import { defineUserRules } from '../auth/auth.policies.js';
 import { defineBranchRules } from '../branches/branches.policies.js';
 import { defineCatalogueRules } from '../catalogue/catalogue.policies.js';
 import { defineClientRules } from '../clients/clients.policies.js';
+import { defineCompareRules } from '../compare/compare.policies.js';
 import { defineDayCloseRules } from '../day-close/day-close.policies.js';
+import { defineMailRules } from '../mail/mail.policies.js';
 import { definePayrollRules } from '../payroll/payroll.policies.js';
 import { defineStaffRules } from '../staff/staff.policies.js';
 import { defineTicketRules } from '../tickets/tickets.policies.js';
@@ -22,6 +24,8 @@ const featureRules: DefineRules[] = [
   defineTicketRules,
   defineDayCloseRules,
   definePayrollRules,
+  defineMailRules,
+  defineCompareRules,
 ];
 
 /** The one place abilities are built; the web receives the same rules packed in /auth/me. */

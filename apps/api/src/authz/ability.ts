@@ -26,6 +26,10 @@ type Records = {
   PayrollRun: { organisationId: string };
   /** One staff member's pay in a run; `branchId` is their home branch, `runStatus` the run's status. */
   PayrollLine: { organisationId: string; branchId: string; staffId: string; runStatus: string };
+  /** An e-mail the app sent or failed to send (the outbox). */
+  OutboundMessage: { organisationId: string };
+  /** A branch's figures in the comparison and its franchise fee statements. */
+  BranchFigures: { organisationId: string; branchId: string };
 };
 type Tagged = { [N in keyof Records]: ForcedSubject<N> & Records[N] }[keyof Records];
 

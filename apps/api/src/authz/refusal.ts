@@ -38,6 +38,8 @@ const subjectLabel: Record<SubjectName, string> = {
   Timesheet: 'timesheet hours',
   PayrollRun: 'payroll runs',
   PayrollLine: 'payroll figures',
+  OutboundMessage: 'mail sent by the app',
+  BranchFigures: 'branch figures and fee statements',
   all: 'this',
 };
 

@@ -11,7 +11,7 @@ import { ClientDetailView, ClientPageView } from './dto/client.view.js';
 import { CreateClientDto } from './dto/create-client.dto.js';
 import { FormulaPageView } from './dto/formula.view.js';
 import { ListClientsDto } from './dto/list-clients.dto.js';
-import { PageQueryDto } from './dto/page-query.dto.js';
+import { PageQueryDto } from '../common/page-query.dto.js';
 import { UpdateClientDto } from './dto/update-client.dto.js';
 import { GetClientQuery } from './queries/get-client.query.js';
 import { ListClientFormulasQuery } from './queries/list-client-formulas.query.js';

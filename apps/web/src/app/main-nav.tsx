@@ -1,10 +1,12 @@
-import { BoxIcon, ConfirmIcon, GridViewIcon, OfficeIcon, PeopleIcon, PersonIcon, PropertiesIcon } from '@blueprintjs/icons';
+import { BankAccountIcon, BoxIcon, ConfirmIcon, EnvelopeIcon, GridViewIcon, GroupedBarChartIcon, OfficeIcon, PeopleIcon, PersonIcon, PropertiesIcon, TimelineBarChartIcon } from '@blueprintjs/icons';
 import { NavLink } from 'react-router';
 import { useAbility } from '../lib/ability';
 import { routePaths } from '../lib/route-paths';
+import { useSessionUser } from '../lib/session';
 
 export function MainNav() {
   const ability = useAbility();
+  const user = useSessionUser();
   return (
     <nav aria-label="Main" className="tr-nav">
       <ul>
@@ -38,6 +40,30 @@ export function MainNav() {
             </NavLink>
           </li>
         )}
+        {user?.staffId && ability.can('read', 'StaffPay') && (
+          <li>
+            <NavLink to={routePaths.earnings} className="tr-nav-link">
+              <TimelineBarChartIcon />
+              Earnings
+            </NavLink>
+          </li>
+        )}
+        {ability.can('read', 'PayrollRun') && (
+          <li>
+            <NavLink to={routePaths.payroll} className="tr-nav-link">
+              <BankAccountIcon />
+              Payroll
+            </NavLink>
+          </li>
+        )}
+        {ability.can('read', 'BranchFigures') && (
+          <li>
+            <NavLink to={routePaths.compare} className="tr-nav-link">
+              <GroupedBarChartIcon />
+              Compare
+            </NavLink>
+          </li>
+        )}
         {ability.can('read', 'Catalogue') && (
           <li>
             <NavLink to={routePaths.catalogue} className="tr-nav-link">
@@ -59,6 +85,14 @@ export function MainNav() {
             <NavLink to={routePaths.branches} className="tr-nav-link">
               <OfficeIcon />
               Branches
+            </NavLink>
+          </li>
+        )}
+        {ability.can('read', 'OutboundMessage') && (
+          <li>
+            <NavLink to={routePaths.outbox} className="tr-nav-link">
+              <EnvelopeIcon />
+              Outbox
             </NavLink>
           </li>
         )}

@@ -5,7 +5,7 @@ import type { Me } from './session';
 
 // The names the server's ability factory uses (DESIGN.md §2); the rules themselves come packed in /auth/me.
 export type Action = 'manage' | 'create' | 'read' | 'update' | 'delete' | 'pay' | 'close' | 'void' | 'refund';
-export type Subject = 'Organisation' | 'Branch' | 'User' | 'Catalogue' | 'Staff' | 'StaffPay' | 'Client' | 'Ticket' | 'DayClose' | 'all';
+export type Subject = 'Organisation' | 'Branch' | 'User' | 'Catalogue' | 'Staff' | 'StaffPay' | 'Client' | 'Ticket' | 'DayClose' | 'PayPlan' | 'PaySchedule' | 'PayrollRun' | 'PayrollLine' | 'Timesheet' | 'BranchFigures' | 'OutboundMessage' | 'all';
 /** A loaded record tagged with `subject('Ticket', record)`, so rules with conditions are checked against it. */
 export type TaggedRecord = ForcedSubject<Exclude<Subject, 'all'>>;
 export type AppAbility = MongoAbility<[Action, Subject | TaggedRecord]>;

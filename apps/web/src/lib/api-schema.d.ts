@@ -390,6 +390,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/mail/outbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Every e-mail the app sent or failed to send, newest first, a page at a time (owner, accountant). */
+        get: operations["MailController_outbox"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/tickets": {
         parameters: {
             query?: never;
@@ -939,6 +956,199 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/payroll/runs/{id}/statements": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * E-mails each staff member of an approved run their statement (figures in the body, workbook attached);
+         *     each message is recorded in the outbox, sent or failed with the reason. Sending again is allowed.
+         */
+        post: operations["PayrollRunsController_sendStatements"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/runs/{id}/lines/{lineId}/statement.xlsx": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One staff member's statement workbook: whoever may read the line (a stylist only her own). */
+        get: operations["PayrollRunsController_statement"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/payroll/earnings/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The caller's own pay period so far (closed days only), progress to the next commission tier, a per-day
+         *     series and past statements. 404 without a staff link; the rules on the caller's own pay figures apply.
+         */
+        get: operations["EarningsController_me"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/definitions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** How every figure is counted, for tooltips and column headings. */
+        get: operations["CompareController_definitions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/branches": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Each branch's figures over the range, and their totals. */
+        get: operations["CompareController_branches"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/branches.xlsx": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The comparison table as a workbook, with a sheet of definitions. */
+        get: operations["CompareController_branchesWorkbook"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/trend": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Each branch's sales, tickets, average ticket and colour cost share day by day. */
+        get: operations["CompareController_trend"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/branches/{branchId}/days": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One branch's figures for every business date of the range. */
+        get: operations["CompareController_days"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/branches/{branchId}/stylists": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One branch's figures per staff member over the range. */
+        get: operations["CompareController_stylists"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/fees": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Each branch's franchise fees for the month: gross sales, rates and amounts. */
+        get: operations["CompareController_fees"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/compare/fees/{branchId}.xlsx": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One branch's monthly fee statement as a workbook. */
+        get: operations["CompareController_feeWorkbook"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -1015,6 +1225,10 @@ export interface components {
             varianceNoteThreshold: string;
             /** @description Days a client's patch test stays current for colour. */
             patchTestMaxAgeDays: number;
+            /** @description Franchise royalty on gross sales as a fraction, decimal string (0.06 = 6 %). */
+            royaltyRate: string;
+            /** @description Franchise marketing-fund contribution on gross sales as a fraction, decimal string. */
+            marketingFundRate: string;
             createdAt: string;
             updatedAt: string;
         };
@@ -1039,6 +1253,10 @@ export interface components {
             varianceNoteThreshold?: string;
             /** @description How many days a client's patch test stays current for colour; 180 when left out (a salon policy: local codes govern). */
             patchTestMaxAgeDays?: number;
+            /** @description Franchise royalty on gross sales as a fraction from 0 up to (not including) 1, e.g. "0.06"; "0" when left out. */
+            royaltyRate?: string;
+            /** @description Franchise marketing-fund contribution on gross sales as a fraction from 0 up to (not including) 1; "0" when left out. */
+            marketingFundRate?: string;
         };
         UpdateBranchDto: {
             /** @description The branch's name, unique in the organisation. */
@@ -1061,6 +1279,10 @@ export interface components {
             varianceNoteThreshold?: string;
             /** @description How many days a client's patch test stays current for colour; 180 when left out (a salon policy: local codes govern). */
             patchTestMaxAgeDays?: number;
+            /** @description Franchise royalty on gross sales as a fraction from 0 up to (not including) 1, e.g. "0.06"; "0" when left out. */
+            royaltyRate?: string;
+            /** @description Franchise marketing-fund contribution on gross sales as a fraction from 0 up to (not including) 1; "0" when left out. */
+            marketingFundRate?: string;
         };
         LevelView: {
             id: string;
@@ -1462,6 +1684,25 @@ export interface components {
             allergyNotes?: string;
             /** @description Date of the last skin patch test (YYYY-MM-DD), not after today at the home branch; null clears it. */
             lastPatchTestOn?: string | null;
+        };
+        OutboundMessageView: {
+            id: string;
+            /** @description What the message is, e.g. `pay_statement`. */
+            kind: string;
+            /** @description The address it went to; empty when there was none to send to. */
+            recipient: string;
+            recipientStaffId: string | null;
+            subject: string;
+            /** @description The plain-text body as sent. */
+            textBody: string;
+            attachmentName: string | null;
+            /** @description The record the message is about, e.g. `payroll_run:<id>`. */
+            subjectRef: string | null;
+            /** @enum {string} */
+            status: "failed" | "sent";
+            /** @description Why it was not sent, when it failed. */
+            error: string | null;
+            createdAt: string;
         };
         TicketSummaryView: {
             /** @enum {string} */
@@ -2017,6 +2258,8 @@ export interface components {
             processedStaff: number;
             /** @description Why the run failed, when it did. */
             error: string | null;
+            /** @description Computing, but the instance working on it has not renewed its heartbeat for a minute: starting the period again replaces it. */
+            stalled: boolean;
             startedAt: string;
             completedAt: string | null;
             approvedAt: string | null;
@@ -2067,6 +2310,265 @@ export interface components {
             minimumWageTopUp: string;
             overtimePremium: string;
             grossPay: string;
+        };
+        SentStatementsView: {
+            sent: number;
+            failed: number;
+            messages: components["schemas"]["OutboundMessageView"][];
+        };
+        EarningsBranchView: {
+            id: string;
+            name: string;
+            timeZone: string;
+            currency: string;
+        };
+        EarningsPeriodView: {
+            startDate: string;
+            endDate: string;
+            /** @description The stored pay period, once someone has created it. */
+            id: string | null;
+        };
+        EarningsPlanView: {
+            name: string;
+            /** @enum {string} */
+            tierMode: "marginal" | "whole-period";
+            tiers: {
+                from: string;
+                rate: string;
+            }[];
+            /** @enum {string} */
+            productChargeMode: "none" | "actual-cost" | "percent-of-price" | "fixed-per-colour-service";
+            retailRate: string;
+        };
+        EarningsTierRowView: {
+            from: string;
+            /** @description Null on the top tier. */
+            to: string | null;
+            rate: string;
+            /** @description The commissionable revenue that falls in this tier. */
+            base: string;
+            commission: string;
+        };
+        EarningsFiguresView: {
+            serviceRevenue: string;
+            productCharge: string;
+            commissionableRevenue: string;
+            serviceCommission: string;
+            tierBreakdown: components["schemas"]["EarningsTierRowView"][];
+            retailRevenue: string;
+            retailCommission: string;
+            tips: string;
+            /** @description Timesheet hours recorded in the period so far. */
+            hours: string;
+            hourlyPay: string;
+        };
+        EarningsTierView: {
+            /** @description Index into the plan's tiers (0 = the first). */
+            index: number;
+            from: string;
+            to: string | null;
+            rate: string;
+        };
+        EarningsNextTierView: {
+            index: number;
+            from: string;
+            rate: string;
+        };
+        EarningsTierProgressView: {
+            currentTier: components["schemas"]["EarningsTierView"];
+            /** @description Null on the top tier. */
+            nextTier: components["schemas"]["EarningsNextTierView"] | null;
+            revenueToNextTier: string | null;
+            commissionAtNextTier: string | null;
+            /** @description What reaching the next threshold adds to the service commission. */
+            commissionAdded: string | null;
+            /** @description "0" to "1": how far through the current tier toward the next. */
+            progress: string;
+        };
+        EarningsDayView: {
+            date: string;
+            serviceRevenue: string;
+            productCharge: string;
+            retailRevenue: string;
+            tips: string;
+        };
+        EarningsStatementView: {
+            runId: string;
+            lineId: string;
+            startDate: string;
+            endDate: string;
+            grossPay: string;
+            /** @enum {string} */
+            status: "draft" | "failed" | "computing" | "approved" | "exported";
+        };
+        MyEarningsView: {
+            staffId: string;
+            staffName: string;
+            /** @description The staff member's home branch: its business date, time zone and currency. */
+            branch: components["schemas"]["EarningsBranchView"];
+            /** @description The home branch's business date now. */
+            today: string;
+            /** @description What is not set up yet, so nothing can be computed: the pay schedule, or a pay plan for this period. */
+            missing: ("pay_schedule" | "pay_plan")[];
+            /** @description The pay period holding today; null without a pay schedule. */
+            period: components["schemas"]["EarningsPeriodView"] | null;
+            /** @description The last closed day of the home branch in the period: the figures run through it. Null before any closes. */
+            throughDate: string | null;
+            plan: components["schemas"]["EarningsPlanView"] | null;
+            /** @description Null while something is missing. */
+            figures: components["schemas"]["EarningsFiguresView"] | null;
+            nextTier: components["schemas"]["EarningsTierProgressView"] | null;
+            /** @description Every day from the period's first through `throughDate`, days without work at zero. */
+            days: components["schemas"]["EarningsDayView"][];
+            /** @description Past statements, latest period first. */
+            statements: components["schemas"]["EarningsStatementView"][];
+        };
+        FigureDefinitionView: {
+            /** @description The field name in the views (e.g. `colourCostShare`). */
+            figure: string;
+            /** @description A short column heading. */
+            label: string;
+            /** @description How the figure is counted, in plain words (the README says the same). */
+            definition: string;
+        };
+        CompareDefinitionsView: {
+            /** @description The figures of the comparison, its days and its stylists. */
+            figures: components["schemas"]["FigureDefinitionView"][];
+            /** @description The figures of the monthly fee statement. */
+            fees: components["schemas"]["FigureDefinitionView"][];
+            feeNote: string;
+        };
+        BranchFiguresView: {
+            /** @description null on the totals row. */
+            branchId: string | null;
+            branchName: string;
+            serviceRevenue: string;
+            retailRevenue: string;
+            tickets: number;
+            averageTicket: string | null;
+            colourServiceRevenue: string;
+            colourProductCost: string;
+            colourCostShare: string | null;
+            /** @description null when no approved payroll run's pay period lies wholly in the range. */
+            productChargeRecovered: string | null;
+            retailToServiceRatio: string | null;
+            stylistHours: string;
+            revenuePerStylistHour: string | null;
+            newClients: number;
+            returningClients: number;
+            rebookingRate: string | null;
+            tips: string;
+            /** @description null when no approved payroll run's pay period lies wholly in the range. */
+            commissionCost: string | null;
+            commissionCostShare: string | null;
+            voids: number;
+            refunds: number;
+            refundedAmount: string;
+        };
+        BranchComparisonView: {
+            from: string;
+            to: string;
+            rebookingDays: number;
+            /** @description The branches the caller may see, by name. */
+            rows: components["schemas"]["BranchFiguresView"][];
+            totals: components["schemas"]["BranchFiguresView"];
+        };
+        TrendPointView: {
+            date: string;
+            serviceRevenue: string;
+            retailRevenue: string;
+            tickets: number;
+            averageTicket: string | null;
+            colourCostShare: string | null;
+        };
+        BranchTrendSeriesView: {
+            branchId: string;
+            branchName: string;
+            /** @description One point per business date of the range, zeros where nothing was sold. */
+            points: components["schemas"]["TrendPointView"][];
+        };
+        BranchTrendView: {
+            from: string;
+            to: string;
+            series: components["schemas"]["BranchTrendSeriesView"][];
+        };
+        CompareBranchView: {
+            id: string;
+            name: string;
+            /** @description IANA time zone: the branch's business dates are its own calendar days. */
+            timeZone: string;
+            currency: string;
+        };
+        BranchDayFiguresView: {
+            date: string;
+            /** @description Whether the manager has closed this day; an open day's figures can still change. */
+            dayClosed: boolean;
+            serviceRevenue: string;
+            retailRevenue: string;
+            tickets: number;
+            averageTicket: string | null;
+            colourServiceRevenue: string;
+            colourProductCost: string;
+            colourCostShare: string | null;
+            retailToServiceRatio: string | null;
+            stylistHours: string;
+            revenuePerStylistHour: string | null;
+            newClients: number;
+            returningClients: number;
+            tips: string;
+            voids: number;
+            refunds: number;
+            refundedAmount: string;
+        };
+        BranchDaysView: {
+            branch: components["schemas"]["CompareBranchView"];
+            from: string;
+            to: string;
+            /** @description Every business date of the range, oldest first. */
+            rows: components["schemas"]["BranchDayFiguresView"][];
+        };
+        StylistFiguresView: {
+            staffId: string;
+            staffName: string;
+            serviceRevenue: string;
+            colourServiceRevenue: string;
+            colourProductCost: string;
+            retailRevenue: string;
+            tickets: number;
+            averageTicket: string | null;
+            hours: string;
+            revenuePerHour: string | null;
+            tips: string;
+        };
+        BranchStylistsView: {
+            branch: components["schemas"]["CompareBranchView"];
+            from: string;
+            to: string;
+            /** @description Staff with a line, a sale, a tip or hours at the branch in the range, by name. */
+            rows: components["schemas"]["StylistFiguresView"][];
+        };
+        FeeStatementRowView: {
+            /** @description null on the totals row. */
+            branchId: string | null;
+            branchName: string;
+            grossSales: string;
+            /** @description null on the totals row. */
+            royaltyRate: string | null;
+            royaltyAmount: string;
+            /** @description null on the totals row. */
+            marketingFundRate: string | null;
+            marketingFundAmount: string;
+            totalFees: string;
+        };
+        FeeStatementsView: {
+            /** @description YYYY-MM. */
+            month: string;
+            from: string;
+            to: string;
+            rows: components["schemas"]["FeeStatementRowView"][];
+            totals: components["schemas"]["FeeStatementRowView"];
+            /** @description To be shown with the figures: they are to be confirmed against the franchise agreement. */
+            note: string;
         };
     };
     responses: never;
@@ -2825,6 +3327,30 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["FormulaPageView"];
+                };
+            };
+        };
+    };
+    MailController_outbox: {
+        parameters: {
+            query?: {
+                /** @description Page size, 1 to 200; 50 when left out. */
+                limit?: number;
+                /** @description How many to skip; 0 when left out. */
+                offset?: number;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OutboundMessageView"][];
                 };
             };
         };
@@ -3658,6 +4184,255 @@ export interface operations {
             header?: never;
             path: {
                 id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    PayrollRunsController_sendStatements: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SentStatementsView"];
+                };
+            };
+        };
+    };
+    PayrollRunsController_statement: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+                lineId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EarningsController_me: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MyEarningsView"];
+                };
+            };
+        };
+    };
+    CompareController_definitions: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CompareDefinitionsView"];
+                };
+            };
+        };
+    };
+    CompareController_branches: {
+        parameters: {
+            query: {
+                /** @description A client counts as rebooked when they come back within this many days; 42 when left out. */
+                rebookingDays?: number;
+                /** @description First business date, YYYY-MM-DD. */
+                from: string;
+                /** @description Last business date, YYYY-MM-DD, on or after `from`. */
+                to: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BranchComparisonView"];
+                };
+            };
+        };
+    };
+    CompareController_branchesWorkbook: {
+        parameters: {
+            query: {
+                /** @description A client counts as rebooked when they come back within this many days; 42 when left out. */
+                rebookingDays?: number;
+                /** @description First business date, YYYY-MM-DD. */
+                from: string;
+                /** @description Last business date, YYYY-MM-DD, on or after `from`. */
+                to: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CompareController_trend: {
+        parameters: {
+            query: {
+                /** @description First business date, YYYY-MM-DD. */
+                from: string;
+                /** @description Last business date, YYYY-MM-DD, on or after `from`. */
+                to: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BranchTrendView"];
+                };
+            };
+        };
+    };
+    CompareController_days: {
+        parameters: {
+            query: {
+                /** @description First business date, YYYY-MM-DD. */
+                from: string;
+                /** @description Last business date, YYYY-MM-DD, on or after `from`. */
+                to: string;
+            };
+            header?: never;
+            path: {
+                branchId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BranchDaysView"];
+                };
+            };
+        };
+    };
+    CompareController_stylists: {
+        parameters: {
+            query: {
+                /** @description First business date, YYYY-MM-DD. */
+                from: string;
+                /** @description Last business date, YYYY-MM-DD, on or after `from`. */
+                to: string;
+            };
+            header?: never;
+            path: {
+                branchId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BranchStylistsView"];
+                };
+            };
+        };
+    };
+    CompareController_fees: {
+        parameters: {
+            query: {
+                /** @description The calendar month of the statement, YYYY-MM. */
+                month: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FeeStatementsView"];
+                };
+            };
+        };
+    };
+    CompareController_feeWorkbook: {
+        parameters: {
+            query: {
+                /** @description The calendar month of the statement, YYYY-MM. */
+                month: string;
+            };
+            header?: never;
+            path: {
+                branchId: string;
             };
             cookie?: never;
         };

@@ -9,5 +9,13 @@ export const routePaths = {
   client: '/clients/:clientId',
   catalogue: '/menu-and-products',
   staff: '/people',
+  payroll: '/payroll',
+  payrollPlans: '/payroll/plans',
+  payrollHours: '/payroll/hours',
+  compare: '/compare',
+  compareBranch: '/compare/branches/:branchId',
+  compareFees: '/compare/fees',
+  earnings: '/earnings',
+  outbox: '/outbox',
   signIn: '/sign-in',
 } as const;

@@ -7,3 +7,8 @@ export async function showToast(toast: ToastProps): Promise<void> {
   toaster ??= OverlayToaster.create({ position: Position.TOP, maxToasts: 3 });
   (await toaster).show(toast);
 }
+
+/** Dismisses every toast on screen (tests call it between cases so no toast timer outlives its page). */
+export async function dismissAllToasts(): Promise<void> {
+  if (toaster) (await toaster).clear();
+}

@@ -35,6 +35,8 @@ export class CreateBranchHandler implements ICommandHandler<CreateBranchCommand>
         retailTaxRate: input.retailTaxRate ?? '0',
         varianceNoteThreshold: input.varianceNoteThreshold ?? '5.00',
         patchTestMaxAgeDays: input.patchTestMaxAgeDays ?? 180,
+        royaltyRate: input.royaltyRate ?? '0',
+        marketingFundRate: input.marketingFundRate ?? '0',
       });
       const view = toBranchView(row);
       await this.events.append(new BranchCreated(user.organisationId, row.id, user.id, view));

@@ -25,6 +25,10 @@ export class BranchView {
   varianceNoteThreshold: string;
   /** Days a client's patch test stays current for colour. */
   patchTestMaxAgeDays: number;
+  /** Franchise royalty on gross sales as a fraction, decimal string (0.06 = 6 %). */
+  royaltyRate: string;
+  /** Franchise marketing-fund contribution on gross sales as a fraction, decimal string. */
+  marketingFundRate: string;
   createdAt: string;
   updatedAt: string;
 }
@@ -42,6 +46,8 @@ export function toBranchView(row: BranchRow): BranchView {
     retailTaxRate: plain(row.retailTaxRate),
     varianceNoteThreshold: row.varianceNoteThreshold,
     patchTestMaxAgeDays: row.patchTestMaxAgeDays,
+    royaltyRate: plain(row.royaltyRate),
+    marketingFundRate: plain(row.marketingFundRate),
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };

@@ -55,4 +55,14 @@ export class CreateBranchDto {
   @Min(0)
   @Max(3650)
   patchTestMaxAgeDays?: number;
+
+  /** Franchise royalty on gross sales as a fraction from 0 up to (not including) 1, e.g. "0.06"; "0" when left out. */
+  @IsOptional()
+  @IsDecimalString({ min: '0', max: '0.99999', scale: 5 })
+  royaltyRate?: string;
+
+  /** Franchise marketing-fund contribution on gross sales as a fraction from 0 up to (not including) 1; "0" when left out. */
+  @IsOptional()
+  @IsDecimalString({ min: '0', max: '0.99999', scale: 5 })
+  marketingFundRate?: string;
 }

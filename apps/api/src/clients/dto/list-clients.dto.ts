@@ -1,6 +1,6 @@
 import { IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
 import { Trim } from '../../common/trim.js';
-import { PageQueryDto } from './page-query.dto.js';
+import { PageQueryDto } from '../../common/page-query.dto.js';
 
 export class ListClientsDto extends PageQueryDto {
   /** Part of a name, phone number or e-mail address, any case; a phone matches on its digits alone. */

@@ -10,7 +10,7 @@ import { clientNotFound } from '../client-errors.js';
 import { seesBowlCosts } from '../clients.policies.js';
 import { ClientsRepository } from '../clients.repository.js';
 import type { FormulaComponentView, FormulaPageView, FormulaView } from '../dto/formula.view.js';
-import { DEFAULT_PAGE_SIZE } from '../dto/page-query.dto.js';
+import { DEFAULT_PAGE_SIZE } from '../../common/page-query.dto.js';
 import { ListClientFormulasQuery } from './list-client-formulas.query.js';
 
 // Grams are numeric(12,3) in the database ("60.000"); "60" reads better and is the same quantity.

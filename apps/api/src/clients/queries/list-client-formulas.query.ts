@@ -1,7 +1,7 @@
 import { Query } from '@nestjs/cqrs';
 import type { AuthUser } from '../../auth/auth-user.js';
 import type { FormulaPageView } from '../dto/formula.view.js';
-import type { PageQueryDto } from '../dto/page-query.dto.js';
+import type { PageQueryDto } from '../../common/page-query.dto.js';
 
 export class ListClientFormulasQuery extends Query<FormulaPageView> {
   constructor(

@@ -6,7 +6,7 @@ import { accessibleBy } from '../../authz/accessible-by.js';
 import { Database } from '../../database/database.js';
 import { clientColumns } from '../clients.policies.js';
 import { type ClientPageView, toClientView } from '../dto/client.view.js';
-import { DEFAULT_PAGE_SIZE } from '../dto/page-query.dto.js';
+import { DEFAULT_PAGE_SIZE } from '../../common/page-query.dto.js';
 import { ListClientsQuery } from './list-clients.query.js';
 
 // LIKE treats % and _ as wildcards and \ as its escape: a search for "50%" means those characters.

@@ -95,4 +95,36 @@ describe('BranchFormDialog', () => {
     await waitFor(() => expect(onClose).toHaveBeenCalled());
     expect(JSON.parse(api.calls('PATCH /api/branches/b1a7c1de-0c1f-4a43-8a55-3f1f0f7e0a01')[0]?.body ?? '')).toEqual({ overtimeMultiplier: '2' });
   });
+
+  it('shows the franchise rates as percentages and sends them as the fractions the API keeps', async () => {
+    const [elmstead] = branchRows as [Branch];
+    const api = fakeApi({ 'PATCH /api/branches/b1a7c1de-0c1f-4a43-8a55-3f1f0f7e0a01': json(200, { ...elmstead, royaltyRate: '0.065' }) });
+    const { user, onClose } = renderDialog(elmstead);
+
+    // Stored 0.06 and 0.015: 6 % and 1.5 %.
+    expect((screen.getByLabelText('Royalty (% of gross sales)') as HTMLInputElement).value).toBe('6');
+    expect((screen.getByLabelText('Marketing fund (% of gross sales)') as HTMLInputElement).value).toBe('1.5');
+    await user.clear(screen.getByLabelText('Royalty (% of gross sales)'));
+    await user.type(screen.getByLabelText('Royalty (% of gross sales)'), '6.5{Enter}');
+
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(JSON.parse(api.calls('PATCH /api/branches/b1a7c1de-0c1f-4a43-8a55-3f1f0f7e0a01')[0]?.body ?? '')).toEqual({ royaltyRate: '0.065' });
+  });
+
+  it('puts a refused rate under its percentage field', async () => {
+    fakeApi({
+      'POST /api/branches': problem(400, 'request.invalid', 'Check these fields: marketingFundRate.', [
+        { field: 'marketingFundRate', message: 'marketingFundRate must be a fraction from 0 up to (not including) 1' },
+      ]),
+    });
+    const { user } = renderDialog();
+    await user.type(screen.getByLabelText('Name'), 'Elmstead');
+    await user.selectOptions(screen.getByLabelText('Time zone'), 'America/Chicago');
+    await user.clear(screen.getByLabelText('Marketing fund (% of gross sales)'));
+    await user.type(screen.getByLabelText('Marketing fund (% of gross sales)'), '120');
+    await user.click(screen.getByRole('button', { name: 'Create branch' }));
+
+    await waitFor(() => expect(fieldState('Marketing fund (% of gross sales)').invalid).toBe(true));
+    expect(document.activeElement).toBe(screen.getByLabelText('Marketing fund (% of gross sales)'));
+  });
 });

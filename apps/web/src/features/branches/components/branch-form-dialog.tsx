@@ -23,6 +23,8 @@ const formOrder: BranchField[] = [
   'commissionExemption',
   'varianceNoteThreshold',
   'patchTestMaxAgeDays',
+  'royaltyRate',
+  'marketingFundRate',
 ];
 
 const fieldId = (field: BranchField) => `branch-${field}`;
@@ -165,6 +167,10 @@ function BranchForm({ branch, onDone }: { branch?: Branch; onDone: () => void })
         <div className="tr-form-row">
           {field('varianceNoteThreshold', 'Day-close note above', 'A cash or card difference larger than this needs a note when the day is closed.', text('varianceNoteThreshold', { inputMode: 'decimal' }))}
           {field('patchTestMaxAgeDays', 'Patch test valid for (days)', "How long a client's patch test counts before colour needs a confirmation. Licensed practice and local codes govern.", text('patchTestMaxAgeDays', { inputMode: 'decimal' }))}
+        </div>
+        <div className="tr-form-row">
+          {field('royaltyRate', 'Royalty (% of gross sales)', 'The franchise royalty on the month’s gross sales: 6 means 6 %. 0 when none is due.', text('royaltyRate', { inputMode: 'decimal' }))}
+          {field('marketingFundRate', 'Marketing fund (% of gross sales)', 'The marketing-fund contribution on the same sales. The franchise agreement governs both.', text('marketingFundRate', { inputMode: 'decimal' }))}
         </div>
         <FormGroup
           intent={problems.commissionExemption ? Intent.DANGER : Intent.NONE}
