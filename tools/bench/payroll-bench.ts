@@ -327,6 +327,7 @@ async function startApi(databaseEnv: Record<string, string>): Promise<Api> {
     if (ok) return { process: child, pid: child.pid!, base };
     await new Promise((r) => setTimeout(r, 100));
   }
+  await stopApi({ process: child, pid: child.pid!, base });
   throw new Error('the API did not start');
 }
 
