@@ -76,7 +76,7 @@ export class PayrollLineDetailView extends PayrollLineView {
   result: PayResult;
 }
 
-export const toPayrollLineView = (row: PayrollLineRow): PayrollLineView => ({
+export const toPayrollLineView = (row: Omit<PayrollLineRow, 'input' | 'result'>): PayrollLineView => ({
   id: row.id,
   runId: row.runId,
   staffId: row.staffId,

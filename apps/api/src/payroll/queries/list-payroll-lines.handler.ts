@@ -16,7 +16,8 @@ export class ListPayrollLinesHandler implements IQueryHandler<ListPayrollLinesQu
   async execute({ user, runId }: ListPayrollLinesQuery): Promise<PayrollLineView[]> {
     const found = await this.runs.findRun(user.organisationId, runId);
     if (!found) throw payrollRunNotFound();
-    const rows = await this.runs.lines(runId, readablePayrollLines(this.abilities.createFor(user)));
+    // The list shows figures only: the stored inputs and results stay in the database until a line is opened.
+    const rows = await this.runs.lineFigures(runId, readablePayrollLines(this.abilities.createFor(user)));
     return rows.map(toPayrollLineView);
   }
 }
