@@ -1,4 +1,5 @@
 import { boolean, date, index, integer, numeric, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
 import { users } from './auth.js';
 import { branches } from './branches.js';
 import { products, services, levels } from './catalogue.js';
@@ -69,6 +70,8 @@ export const ticketServiceLines = pgTable(
   (table) => [
     index('ticket_service_lines_ticket_idx').on(table.ticketId),
     index('ticket_service_lines_staff_day_idx').on(table.staffId, table.bookedOn),
+    // Payroll reads a group of staff at a time, as stylists and as assistants.
+    index('ticket_service_lines_assistant_day_idx').on(table.assistantStaffId, table.bookedOn).where(sql`${table.assistantStaffId} is not null`),
   ],
 );
 

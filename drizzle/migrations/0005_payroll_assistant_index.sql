@@ -1,0 +1,1 @@
+CREATE INDEX "ticket_service_lines_assistant_day_idx" ON "ticket_service_lines" USING btree ("assistant_staff_id","booked_on") WHERE "ticket_service_lines"."assistant_staff_id" is not null;
