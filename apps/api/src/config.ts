@@ -17,6 +17,8 @@ export type AppConfig = {
   seedDemo: 'full' | 'tickets' | 'basic' | false;
   webDist: string | null;
   checkpointMinutes: number;
+  /** Staff a payroll run reads, computes and stores at a time: more is a little faster and holds more in memory. */
+  payrollGroupSize: number;
   /** Card payments: the stripe SDK against the local fake unless a real secret key is set. */
   cardProcessor: { mode: 'fake' | 'live'; secretKey: string; webhookSecret: string; fakePort: number };
   /** Outgoing mail: the local SMTP fake started with the app, or a real SMTP server when SMTP_HOST is set. */
@@ -104,6 +106,7 @@ export function parseConfig(env: NodeJS.ProcessEnv): AppConfig {
           : false,
     webDist: env.TRESSURY_WEB_DIST === '' ? null : (env.TRESSURY_WEB_DIST ?? null),
     checkpointMinutes: integer(env, 'CHECKPOINT_MINUTES', 5, 1, 1440),
+    payrollGroupSize: integer(env, 'PAYROLL_GROUP_SIZE', 200, 1, 5000),
     cardProcessor: stripeKey
       ? { mode: 'live', secretKey: stripeKey, webhookSecret: stripeWebhookSecret!, fakePort: 0 }
       : {

@@ -1,7 +1,9 @@
 import type { Writable } from 'node:stream';
+import { setTimeout as pause } from 'node:timers/promises';
 import type { PayInput } from '@tressury/domain';
 import Big from 'big.js';
 import ExcelJS from 'exceljs';
+import { HeapBudget } from '../common/heap-budget.js';
 import type { PayrollLineFigures } from './payroll-runs.repository.js';
 
 // The one module that knows exceljs for payroll exports (STACK.md: unmaintained since 2023, keep it behind one module).
@@ -92,6 +94,30 @@ const sheetName = (name: string, taken: Set<string>): string => {
 
 // Lines whose stored inputs are read at once for the Lines sheet (about 1.3 MB of JSON at 80 services each).
 const INPUTS_PAGE = 100;
+// Written rows the zip may have yet to compress before the Lines sheet waits for it.
+const ZIP_BACKLOG_BYTES = 4 * 1024 * 1024;
+// Never wait on the zip for longer than this per page: a stuck zip must not hang the export.
+const ZIP_WAIT_LIMIT_MS = 30_000;
+// Garbage the Lines sheet may leave before it is collected between pages.
+const HEAP_ALLOWANCE_MB = 24;
+
+/**
+ * Waits until the zip is reading the sheet and has caught up with what it has written. exceljs's streaming
+ * writer ignores back-pressure: rows written while the zip is still busy with earlier entries, or faster
+ * than zlib compresses them, would pile up in memory until the end. The zip starts reading an entry by
+ * piping the sheet's stream into a PassThrough of its own.
+ */
+async function zipCaughtUp(sheet: ExcelJS.Worksheet): Promise<void> {
+  // archiver's PassThrough comes from readable-stream 2, which predates writableLength and readableLength.
+  type Entry = { _writableState?: { length: number }; _readableState?: { length: number } };
+  const pipes = (sheet as unknown as { stream: { pipes?: Entry[] } }).stream.pipes;
+  for (let waited = 0; waited < ZIP_WAIT_LIMIT_MS; waited += 2) {
+    const entry = pipes?.[0];
+    if (!entry?._writableState || !entry._readableState) return; // not the exceljs this was written for
+    if (entry._writableState.length + entry._readableState.length <= ZIP_BACKLOG_BYTES) return;
+    await pause(2);
+  }
+}
 
 /**
  * One style object per number format, shared by every cell that has it: exceljs looks a cell's style up by
@@ -193,7 +219,10 @@ async function writeLinesSheet(sheet: ExcelJS.Worksheet, styles: SharedStyles, d
   const header = sheet.addRow(LINES_COLUMNS);
   header.font = { bold: true };
   header.commit();
+  const budget = new HeapBudget(HEAP_ALLOWANCE_MB);
   for (let start = 0; start < data.lines.length; start += INPUTS_PAGE) {
+    await zipCaughtUp(sheet);
+    budget.settle();
     const page = data.lines.slice(start, start + INPUTS_PAGE);
     const inputs = await data.inputsOf(page.map((l) => l.id));
     for (const line of page) {

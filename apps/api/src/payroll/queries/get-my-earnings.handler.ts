@@ -94,7 +94,7 @@ export class GetMyEarningsHandler implements IQueryHandler<GetMyEarningsQuery> {
 
     // The reader reads only the period's dates; the period need not be stored yet.
     const period: PayPeriodRow = stored ?? { id: '', organisationId: user.organisationId, createdAt: now, ...range };
-    const [own] = await this.inputs.forPeriod(user.organisationId, period, schedule, { staffId: member.id });
+    const own = await this.inputs.forStaff(user.organisationId, period, schedule, member.id);
     // Nothing booked yet: only the tiers shape the result, every figure zero.
     const input: PayInput = own?.input ?? {
       plan: { tierMode: version.tierMode, tiers: version.tiers, productCharge: { mode: 'none' }, retailRate: '0' },
