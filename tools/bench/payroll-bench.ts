@@ -4,7 +4,8 @@
 //
 //   npm run build && npm run bench:payroll                    PGlite in a temporary directory
 //   DATABASE_URL=postgres://… npm run bench:payroll           a fresh database on that server (dropped afterwards)
-//   bash tools/test/with-postgres.sh npm run bench:payroll    the same on a throwaway local cluster
+//   bash tools/test/with-postgres.sh bash -c 'DATABASE_URL=$TEST_DATABASE_URL npm run bench:payroll'
+//                                                             the same on a throwaway local cluster
 import { randomUUID } from 'node:crypto';
 import { type ChildProcess, spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
@@ -194,7 +195,8 @@ async function bench(target: Target): Promise<void> {
     },
   ]);
   await insert('pay_plan_assignments', allStaff.map((staffId) => ({ id: randomUUID(), organisation_id: organisationId, staff_id: staffId, plan_id: planId, effective_from: firstDay, created_by_id: ownerId })));
-  // A server's autovacuum gathers planner statistics soon after a bulk load; PGlite has no autovacuum.
+  // A server's autovacuum gathers planner statistics soon after a bulk load; on PGlite the API gathers
+  // them when it opens the database (apps/api/src/database/planner-statistics.ts).
   await client.query(target.engine === 'PostgreSQL' ? 'analyze' : 'checkpoint');
   await client.close();
   const loaded = performance.now();
