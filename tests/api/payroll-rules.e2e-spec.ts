@@ -201,6 +201,13 @@ describe('payroll rules', () => {
     const after = (await h.lines(rerun.id)).find((l) => l.staffId === floor.staff.rhea.id)!;
     expect(after).toMatchObject({ serviceRevenue: '110.00', productCharge: money(charge), serviceCommission: money(new Decimal('110.00').minus(charge).times('0.50')) });
     expect(new Decimal(before.serviceCommission).minus(after.serviceCommission).toFixed(2)).toBe(money(new Decimal('3.40').times('0.50')));
+    // Stored as a correction of its own, beside lines whose product cost is still their bowls'.
+    const [stored] = await h.query<{ adjustments: { date: string; amount: string }[]; costs: string }>(sql`
+      select input->'productChargeAdjustments' as adjustments,
+             (select sum((l->>'productCost')::numeric) from jsonb_array_elements(input->'serviceLines') l)::text as costs
+      from payroll_lines where run_id = ${rerun.id} and staff_id = ${floor.staff.rhea.id}`);
+    expect(stored!.adjustments).toEqual([expect.objectContaining({ date: today, amount: '3.40' })]);
+    expect(new Decimal(stored!.costs).toFixed(2)).toBe(new Decimal(bowlCost!.total).toFixed(2));
   });
 
   it('answers 409 over a run still computing, and replaces one whose heartbeat stopped a minute ago', async () => {

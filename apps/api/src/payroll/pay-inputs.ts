@@ -39,7 +39,7 @@ export type PayrollScope = {
   closedDays: Set<string>;
 };
 
-type Activity = Pick<PayInput, 'serviceLines' | 'retailLines' | 'tips' | 'hours'>;
+type Activity = Pick<PayInput, 'serviceLines' | 'retailLines' | 'tips' | 'hours'> & { productChargeAdjustments: NonNullable<PayInput['productChargeAdjustments']> };
 
 const plain = (value: string): string => new Big(value).toFixed();
 
@@ -124,12 +124,11 @@ export class PayInputsReader {
     const activity = new Map<string, Activity>();
     const of = (staffId: string): Activity => {
       let found = activity.get(staffId);
-      if (!found) activity.set(staffId, (found = { serviceLines: [], retailLines: [], tips: [], hours: [] }));
+      if (!found) activity.set(staffId, (found = { serviceLines: [], retailLines: [], tips: [], hours: [], productChargeAdjustments: [] }));
       return found;
     };
     const closed = (branchId: string, date: string) => scope.closedDays.has(`${branchId} ${date}`);
     const queries = groupQueries(scope.organisationId, scope.period, [...inGroup]);
-    const chargeCorrections: { staffId: string; amount: string }[] = [];
 
     const bowlCost = new Map(Array.from(await this.textRows(queries.bowlCosts), ([lineId, cost]) => [lineId!, cost!]));
     for (const [date, id, staffId, assistantStaffId, assistantShare, price, isColour, branchId] of await this.textRows(queries.serviceLines, true)) {
@@ -157,19 +156,9 @@ export class PayInputsReader {
       if (category === 'service') mine.serviceLines.push({ id, date: date!, price: amount!, isColour: false, productCost: '0.00' });
       else if (category === 'retail') mine.retailLines.push({ id, date: date!, amount: amount! });
       else if (category === 'tip') mine.tips.push({ date: date!, amount: amount! });
-      else if (category === 'product_charge') chargeCorrections.push({ staffId: staffId!, amount: amount! });
+      else if (category === 'product_charge') mine.productChargeAdjustments.push({ id, date: date!, amount: amount! });
     }
     for (const [date, staffId, , hours] of await this.textRows(queries.hours, true)) of(staffId!).hours.push({ date: date!, hours: plain(hours!) });
-
-    // A product-charge correction has no price of its own and computePay caps a line's charge at its price,
-    // so it is added to the product cost of the staff member's highest-priced line in the period.
-    for (const correction of chargeCorrections) {
-      const lines = of(correction.staffId).serviceLines.filter((l) => new Big(l.price).gt(0));
-      const target = lines.reduce<(typeof lines)[number] | undefined>((best, l) => (!best || new Big(l.price).gt(best.price) ? l : best), undefined);
-      if (!target) continue;
-      const cost = new Big(target.productCost).plus(correction.amount);
-      target.productCost = (cost.lt(0) ? new Big(0) : cost).toFixed(2);
-    }
 
     return group.filter((member) => activity.has(member.id)).map((member) => this.staffInput(scope, member, activity.get(member.id)!));
   }
@@ -181,7 +170,7 @@ export class PayInputsReader {
     return own ?? null;
   }
 
-  private staffInput(scope: PayrollScope, member: StaffRow, activity: Activity): StaffPayInput {
+  private staffInput(scope: PayrollScope, member: StaffRow, { productChargeAdjustments, ...activity }: Activity): StaffPayInput {
     const branch = scope.branchOf.get(member.homeBranchId)!;
     const version = scope.planOf.get(member.id) ?? null;
     const hourlyRate = member.hourlyRate ?? version?.hourlyRate ?? null;
@@ -200,6 +189,7 @@ export class PayInputsReader {
           }
         : { tierMode: 'marginal', tiers: [{ from: '0', rate: '0' }], productCharge: { mode: 'none' }, retailRate: '0' },
       ...activity,
+      ...(productChargeAdjustments.length > 0 ? { productChargeAdjustments } : {}),
       wageRules: {
         minimumWage: branch.minimumWage,
         overtimeAfterHours: plain(branch.overtimeAfterHours),

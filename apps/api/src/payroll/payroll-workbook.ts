@@ -233,6 +233,9 @@ async function writeLinesSheet(sheet: ExcelJS.Worksheet, styles: SharedStyles, d
       for (const s of input.serviceLines) {
         styles.addRow(sheet, [...who, 'service', neutralise(s.id), utcDate(s.date), s.isColour ? 'yes' : 'no', Number(s.price), Number(s.share ?? '1'), Number(s.productCost)], formats);
       }
+      for (const a of input.productChargeAdjustments ?? []) {
+        styles.addRow(sheet, [...who, 'product charge adjustment', neutralise(a.id), utcDate(a.date), null, Number(a.amount), null, null], formats);
+      }
       for (const r of input.retailLines) {
         styles.addRow(sheet, [...who, 'retail', neutralise(r.id), utcDate(r.date), null, Number(r.amount), null, null], formats);
       }

@@ -96,6 +96,34 @@ describe('computePay: minimum wage (29 U.S.C. 206) and product charges (29 CFR 5
   });
 });
 
+// Booked corrections of the charge are a product rule of ours (common practice: the manager's figure is the
+// charge itself, so no markup and no percentage applies to it); the arithmetic is checked by hand.
+describe('computePay: product-charge adjustments', () => {
+  const colour = { id: 's1', date: '2024-03-05', price: '200.00', isColour: true, productCost: '20.00' };
+  const adjustment = (amount: string) => ({ id: 'adjustment:1', date: '2024-03-07', amount });
+
+  it('adds a correction to the charge as booked, without the markup of the plan', () => {
+    const result = pay({ plan: { productCharge: { mode: 'actual-cost', markup: '0.10' } }, serviceLines: [colour], productChargeAdjustments: [adjustment('3.40')] });
+    expect(result.productCharge).toBe('25.40'); // 20 × 1.10 + 3.40
+    expect(result.serviceCommission).toBe('69.84'); // (200 − 25.40) × 40 %
+  });
+
+  it('applies a correction under a percentage-of-price rule too, where product cost plays no part', () => {
+    const result = pay({ plan: { productCharge: { mode: 'percent-of-price', value: '0.10' } }, serviceLines: [colour], productChargeAdjustments: [adjustment('3.40')] });
+    expect(result.productCharge).toBe('23.40'); // 10 % of 200 + 3.40
+  });
+
+  it('lets a negative correction take the charge down, never below nothing', () => {
+    const plan = { productCharge: { mode: 'actual-cost' } } as const;
+    expect(pay({ plan, serviceLines: [colour], productChargeAdjustments: [adjustment('-5.00')] }).productCharge).toBe('15.00');
+    expect(pay({ plan, serviceLines: [colour], productChargeAdjustments: [adjustment('-50.00')] }).productCharge).toBe('0.00');
+  });
+
+  it('names a bad correction by its path', () => {
+    expect(() => pay({ serviceLines: [colour], productChargeAdjustments: [adjustment('3.4.0')] })).toThrow(/productChargeAdjustments\[0\]\.amount/);
+  });
+});
+
 describe('computePay: tips (29 U.S.C. 203(m)(2)(B), 29 CFR 531.60)', () => {
   it('passes tips through whole and keeps them out of the regular rate, top-up and overtime', () => {
     const without = pay({ plan: { hourlyRate: '7.00' }, hours: weekOf(44) });

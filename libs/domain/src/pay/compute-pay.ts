@@ -1,3 +1,4 @@
+import Big from 'big.js';
 import { moneyOf, moneyText, sum } from '../money.js';
 import { serviceTotals } from './product-charge.js';
 import { tierCommission } from './tiers.js';
@@ -14,7 +15,9 @@ export function computePay(input: PayInput): PayResult {
 
   const totals = serviceTotals(pay.serviceLines, pay.productCharge);
   const serviceRevenue = moneyOf(totals.revenue);
-  const productCharge = moneyOf(totals.charge);
+  // A correction may take the charge back down, never below nothing.
+  const charge = totals.charge.plus(sum(pay.chargeAdjustments));
+  const productCharge = moneyOf(charge.lt(0) ? new Big(0) : charge);
   const commissionableRevenue = serviceRevenue.minus(productCharge);
   const tiers = tierCommission(commissionableRevenue, pay.tiers, pay.tierMode);
   const serviceCommission = tiers.total;

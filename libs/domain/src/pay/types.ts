@@ -13,6 +13,11 @@ export type PayInput = {
     hourlyRate?: string;
   };
   serviceLines: { id: string; date: string; price: string; isColour: boolean; productCost: string; share?: string }[];
+  /**
+   * Corrections of the product charge booked after a day was closed (e.g. a bowl left off a ticket): added to
+   * the period's charge as they are, whatever the plan's rule, since the amount booked is the charge itself.
+   */
+  productChargeAdjustments?: { id: string; date: string; amount: string }[];
   retailLines: { id: string; date: string; amount: string }[];
   tips: { date: string; amount: string }[];
   hours: { date: string; hours: string }[];
@@ -68,6 +73,7 @@ export type ValidPayInput = {
   retailRate: Big;
   hourlyRate: Big;
   serviceLines: ServiceLine[];
+  chargeAdjustments: Big[];
   retailAmounts: Big[];
   tipAmounts: Big[];
   hours: HoursEntry[];

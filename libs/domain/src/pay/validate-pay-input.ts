@@ -113,6 +113,13 @@ export function validatePayInput(input: unknown): ValidPayInput {
       share: readOptionalDecimal(line.share, fieldPath(field, 'share'), '1', RATE),
     };
   });
+  const chargeAdjustments = (root.productChargeAdjustments === undefined ? [] : readArray(root.productChargeAdjustments, 'productChargeAdjustments')).map((raw, i) => {
+    const field = fieldPath('productChargeAdjustments', i);
+    const adjustment = readObject(raw, field);
+    readString(adjustment.id, fieldPath(field, 'id'));
+    parseBusinessDate(adjustment.date, fieldPath(field, 'date'));
+    return readDecimal(adjustment.amount, fieldPath(field, 'amount'));
+  });
   const retailAmounts = readArray(root.retailLines, 'retailLines').map((raw, i) => {
     const field = fieldPath('retailLines', i);
     const line = readObject(raw, field);
@@ -134,6 +141,7 @@ export function validatePayInput(input: unknown): ValidPayInput {
     retailRate,
     hourlyRate,
     serviceLines,
+    chargeAdjustments,
     retailAmounts,
     tipAmounts,
     hours: readHours(root.hours),

@@ -188,7 +188,14 @@ function daysOf(input: PayInput, from: string, through: string): EarningsDayView
   for (let date = from; date <= through; date = addDays(date, 1)) {
     const on = <T extends { date: string }>(rows: T[]) => rows.filter((row) => row.date === date);
     const retailLines = on(input.retailLines);
-    const day = computePay({ ...input, serviceLines: on(input.serviceLines), retailLines, tips: on(input.tips), hours: [] });
+    const day = computePay({
+      ...input,
+      serviceLines: on(input.serviceLines),
+      productChargeAdjustments: on(input.productChargeAdjustments ?? []),
+      retailLines,
+      tips: on(input.tips),
+      hours: [],
+    });
     days.push({ date, serviceRevenue: day.serviceRevenue, productCharge: day.productCharge, retailRevenue: sumMoney(retailLines.map((line) => line.amount)), tips: day.tips });
   }
   return days;

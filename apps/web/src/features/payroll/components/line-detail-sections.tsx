@@ -69,6 +69,11 @@ export function LineDetailSections({ detail }: { detail: PayrollLineDetail }) {
       <Section title={`Service lines (${input.serviceLines.length})`}>
         <ServiceLineTable lines={input.serviceLines} />
       </Section>
+      {input.productChargeAdjustments && input.productChargeAdjustments.length > 0 && (
+        <Section title={`Product charge adjustments (${input.productChargeAdjustments.length})`}>
+          <DatedAmounts caption="Product charge adjustments" rows={input.productChargeAdjustments.map((a) => ({ key: a.id, date: a.date, amount: a.amount }))} />
+        </Section>
+      )}
       <Section title={`Retail lines (${input.retailLines.length})`}>
         {input.retailLines.length === 0 ? (
           <Empty>No retail sold in this period.</Empty>

@@ -140,6 +140,7 @@ export const wrenDetail: PayrollLineDetail = {
       { id: '5e000000-0000-4000-8000-000000000001', date: '2026-03-03', price: '185.00', isColour: true, productCost: '21.40' },
       { id: '5e000000-0000-4000-8000-000000000002', date: '2026-03-04', price: '65.00', isColour: false, productCost: '0.00' },
     ],
+    productChargeAdjustments: [{ id: 'adjustment:ad000000-0000-4000-8000-000000000001', date: '2026-03-06', amount: '3.40' }],
     retailLines: [{ id: 'ae000000-0000-4000-8000-000000000001', date: '2026-03-05', amount: '42.00' }],
     tips: [{ date: '2026-03-03', amount: '30.00' }],
     hours: [

@@ -178,6 +178,7 @@ describe('Payroll: run and review', () => {
     const weeks = within(drawer).getByRole('table', { name: 'Workweeks' });
     expect(within(weeks).getAllByRole('row')[1]?.textContent).toContain('46.5932.4020.050.006.565.17Applies');
     expect(within(drawer).getByRole('table', { name: 'Service lines' }).textContent).toContain('Colour service185.0021.40100 %');
+    expect(within(drawer).getByRole('table', { name: 'Product charge adjustments' }).textContent).toContain('3.40');
     expect(within(drawer).getByRole('table', { name: 'Retail lines' }).textContent).toContain('42.00');
     expect(within(drawer).getByRole('table', { name: 'Tips' }).textContent).toContain('30.00');
     expect(within(drawer).getByText(/Product charge: The colour product's cost plus 10 %/)).toBeTruthy();
