@@ -45,8 +45,8 @@ const plain = (value: string): string => new Big(value).toFixed();
 
 /**
  * A group of staff members' rows for the period, one query per kind, found through the staff indexes.
- * Closed branch-days are matched in JavaScript rather than joined: without planner statistics (PGlite
- * keeps none) the planner scanned day_closes once per line.
+ * Closed branch-days are matched in JavaScript against the set the run read when it began, so every group
+ * sees the same days.
  */
 function groupQueries(organisationId: string, { startDate, endDate }: PayPeriodRow, staffIds: string[]) {
   const inPeriod = (column: SQL) => sql`${column} between ${startDate}::date and ${endDate}::date`;
